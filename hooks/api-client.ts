@@ -1,0 +1,65 @@
+import { apiErrorSchema } from '@/shared/schemas/api-error';
+
+/** An API refusal with the server's message and field details. */
+export class ApiError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: string,
+    message: string,
+    readonly fields: Record<string, string> = {},
+  ) {
+    super(message);
+    this.name = 'ApiError';
+  }
+}
+
+/**
+ * Calls the API on the same origin with the session cookie. Non-2xx answers
+ * become ApiError; a network failure becomes ApiError with status 0.
+ * `acceptStatuses` lets a caller read a JSON body on a non-2xx answer (health's 503).
+ */
+export async function api<T>(path: string, init: RequestInit & { json?: unknown; acceptStatuses?: number[] } = {}): Promise<T> {
+  const { json, acceptStatuses = [], headers, ...rest } = init;
+  let res: Response;
+  try {
+    res = await fetch(`/api${path}`, {
+      credentials: 'same-origin',
+      ...rest,
+      headers: {
+        Accept: 'application/json',
+        ...(json !== undefined ? { 'Content-Type': 'application/json' } : {}),
+        ...apiHeaders(),
+        ...headers,
+      },
+      body: json !== undefined ? JSON.stringify(json) : rest.body,
+    });
+  } catch {
+    throw new ApiError(0, 'network', 'Baywalk cannot reach the server. Check the connection and try again.');
+  }
+  const text = await res.text();
+  const body = text ? safeJson(text) : undefined;
+  if (res.ok || acceptStatuses.includes(res.status)) return body as T;
+  const parsed = apiErrorSchema.safeParse(body);
+  if (parsed.success) {
+    const details = parsed.data.error.details as { fields?: Record<string, string> } | undefined;
+    throw new ApiError(res.status, parsed.data.error.code, parsed.data.error.message, details?.fields ?? {});
+  }
+  throw new ApiError(res.status, 'http', `The server answered ${res.status}. Try again in a moment.`);
+}
+
+function safeJson(text: string): unknown {
+  try {
+    return JSON.parse(text);
+  } catch {
+    return undefined;
+  }
+}
+
+/** Extra headers on every call; the CSRF layer registers its token here. */
+let extraHeaders: () => Record<string, string> = () => ({});
+export function setApiHeaders(fn: () => Record<string, string>) {
+  extraHeaders = fn;
+}
+function apiHeaders() {
+  return extraHeaders();
+}

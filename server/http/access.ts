@@ -1,0 +1,20 @@
+import type {} from 'passport';
+import type { RequestHandler } from 'express';
+import type { Access, AccessGuard } from './route-table';
+import { forbidden, unauthenticated } from '../errors';
+
+/** The signed-in person as the access check sees them. */
+export interface SessionUser {
+  id: number;
+  shopId: number;
+  role: string;
+}
+
+/** Deny by default: public routes pass; others need a signed-in user whose role is listed. */
+export const accessGuard: AccessGuard = (allow: Access): RequestHandler => (req, _res, next) => {
+  if (allow === 'public') return next();
+  const user = req.user as SessionUser | undefined;
+  if (!user) return next(unauthenticated());
+  if (!allow.includes(user.role)) return next(forbidden());
+  next();
+};

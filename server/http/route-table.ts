@@ -1,0 +1,62 @@
+import type { Request, Response, Router, RequestHandler } from 'express';
+import type { ZodType } from 'zod';
+import { badRequest } from '../errors';
+import { zodDetails } from './zod-details';
+
+/** Who may call a route: 'public' for anyone, else the roles allowed. */
+export type Access = 'public' | readonly string[];
+
+export interface HandlerContext<B = unknown, Q = unknown> {
+  body: B;
+  query: Q;
+  params: Record<string, string>;
+  req: Request;
+  res: Response;
+}
+
+/**
+ * One API route. Every route declares `allow`; the table refuses to mount a
+ * route without it, so nothing serves by accident (deny by default).
+ * A handler returns the JSON to send, or `undefined` when it wrote the
+ * response itself (files, streams).
+ */
+export interface RouteDef {
+  method: 'get' | 'post' | 'put' | 'patch' | 'delete';
+  path: string;
+  allow: Access;
+  body?: ZodType;
+  query?: ZodType;
+  status?: number;
+  handler: (ctx: HandlerContext<any, any>) => Promise<unknown> | unknown;
+  /** Extra middleware run after the access check (uploads, rate limits). */
+  before?: RequestHandler[];
+}
+
+/** Checks access for a route; supplied by the auth layer. */
+export type AccessGuard = (allow: Access) => RequestHandler;
+
+/** Mounts route definitions on a router: access → extra middleware → validation → handler. */
+export function mountRoutes(router: Router, routes: readonly RouteDef[], guard: AccessGuard) {
+  for (const route of routes) {
+    if (!route.allow) throw new Error(`Route ${route.method.toUpperCase()} ${route.path} declares no access rule`);
+    router[route.method](route.path, guard(route.allow), ...(route.before ?? []), async (req, res) => {
+      const body = parseWith(route.body, req.body ?? {}, 'body');
+      const query = parseWith(route.query, req.query, 'query');
+      const result = await route.handler({ body, query, params: req.params as Record<string, string>, req, res });
+      if (result === undefined) {
+        if (!res.headersSent) res.status(204).end();
+        return;
+      }
+      res.status(route.status ?? 200).json(result);
+    });
+  }
+}
+
+function parseWith(schema: ZodType | undefined, value: unknown, where: string) {
+  if (!schema) return value;
+  const parsed = schema.safeParse(value);
+  if (!parsed.success) {
+    throw badRequest(`Some ${where === 'body' ? 'fields' : 'parameters'} need fixing.`, { fields: zodDetails(parsed.error) });
+  }
+  return parsed.data;
+}

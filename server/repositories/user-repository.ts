@@ -1,0 +1,31 @@
+import type { Knex } from 'knex';
+
+export type Role = 'owner' | 'lead' | 'tech' | 'support';
+
+export interface UserRow {
+  id: number;
+  shop_id: number;
+  email: string;
+  name: string;
+  password_hash: string;
+  role: Role;
+  active: number | boolean;
+  last_sign_in_at: Date | null;
+  created_at: Date;
+}
+
+/** Users table access; every read that serves a request is scoped by shop. */
+export function createUserRepository(knex: Knex) {
+  return {
+    async create(user: Pick<UserRow, 'shop_id' | 'email' | 'name' | 'password_hash' | 'role'>, trx: Knex = knex): Promise<number> {
+      const [id] = await trx('users').insert({ ...user, email: user.email.toLowerCase() });
+      return id as number;
+    },
+    async findByEmail(email: string): Promise<UserRow | undefined> {
+      return knex<UserRow>('users').where({ email: email.toLowerCase() }).first();
+    },
+    async findInShop(shopId: number, id: number): Promise<UserRow | undefined> {
+      return knex<UserRow>('users').where({ shop_id: shopId, id }).first();
+    },
+  };
+}

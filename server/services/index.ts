@@ -1,0 +1,12 @@
+import type { Knex } from 'knex';
+import type { Config } from '../config';
+import { createHealthService } from './health-service';
+
+/** Everything the routes call, built once per app. Services never see req/res. */
+export function createServices(deps: { knex: Knex; config: Config }) {
+  return {
+    health: createHealthService(deps.knex),
+  };
+}
+
+export type Services = ReturnType<typeof createServices>;

@@ -1,0 +1,42 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Browser } from 'playwright-core';
+import { DESKTOP, PHONE, launchBrowser, screenshot, watchConsole } from '../support/browser';
+import { startTestServer } from '../support/test-app';
+
+describe('first screen in Chromium', () => {
+  let server: Awaited<ReturnType<typeof startTestServer>>;
+  let browser: Browser;
+
+  beforeAll(async () => {
+    server = await startTestServer();
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+    await server?.close();
+  });
+
+  for (const [name, viewport] of [['phone', PHONE], ['desktop', DESKTOP]] as const) {
+    it(`shows the product and a connected database at ${viewport.width}x${viewport.height}`, async () => {
+      const page = await browser.newPage({ viewport });
+      const errors = watchConsole(page);
+      await page.goto(server.url + '/');
+      await page.getByTestId('status-db-ok').waitFor({ timeout: 30_000 });
+      expect(await page.getByRole('heading', { name: 'Baywalk' }).isVisible()).toBe(true);
+
+      // The shipped Nunito Sans is loaded and applied (no network font).
+      const font = await page.getByRole('heading', { name: 'Baywalk' }).evaluate((el) => getComputedStyle(el).fontFamily);
+      expect(font).toContain('NunitoSans_700Bold');
+      expect(await page.evaluate(() => document.fonts.check('700 16px NunitoSans_700Bold'))).toBe(true);
+
+      // Content is centred with a maximum width on a wide screen.
+      const box = await page.getByTestId('status-ready').boundingBox();
+      expect(box).not.toBeNull();
+      if (viewport === DESKTOP) expect(box!.width).toBeLessThanOrEqual(960);
+
+      await screenshot(page, `first-screen-${name}`);
+      expect(errors).toEqual([]);
+      await page.close();
+    });
+  }
+});

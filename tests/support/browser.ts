@@ -1,0 +1,42 @@
+/// <reference types="node" />
+import fs from 'node:fs';
+import path from 'node:path';
+import { chromium, type Browser, type Page } from 'playwright-core';
+
+export const PHONE = { width: 390, height: 844 } as const;
+export const DESKTOP = { width: 1280, height: 800 } as const;
+export const SCREENSHOT_DIR = path.resolve(__dirname, '../../test-artifacts/screenshots');
+
+/** Debian's Chromium, headless, with the flags this closed network needs. */
+export async function launchBrowser(): Promise<Browser> {
+  // playwright gives each launch a fresh temporary profile (a new --user-data-dir).
+  return chromium.launch({
+    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+    headless: true,
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
+  });
+}
+
+/** Collects console errors and page errors for a page. */
+export function watchConsole(page: Page): string[] {
+  const errors: string[] = [];
+  page.on('console', (msg) => {
+    if (msg.type() === 'error') errors.push(msg.text());
+  });
+  page.on('pageerror', (err) => errors.push(err.message));
+  return errors;
+}
+
+/** Saves a screenshot under test-artifacts/screenshots (git-ignored). */
+export async function screenshot(page: Page, name: string) {
+  fs.mkdirSync(SCREENSHOT_DIR, { recursive: true });
+  await page.screenshot({ path: path.join(SCREENSHOT_DIR, `${name}.png`), fullPage: true });
+}
