@@ -28,7 +28,8 @@ export async function api<T>(path: string, init: RequestInit & { json?: unknown;
       headers: {
         Accept: 'application/json',
         ...(json !== undefined ? { 'Content-Type': 'application/json' } : {}),
-        ...apiHeaders(),
+        // The server's CSRF guard refuses state changes without this header.
+        'X-Baywalk-Request': '1',
         ...headers,
       },
       body: json !== undefined ? JSON.stringify(json) : rest.body,
@@ -53,13 +54,4 @@ function safeJson(text: string): unknown {
   } catch {
     return undefined;
   }
-}
-
-/** Extra headers on every call; the CSRF layer registers its token here. */
-let extraHeaders: () => Record<string, string> = () => ({});
-export function setApiHeaders(fn: () => Record<string, string>) {
-  extraHeaders = fn;
-}
-function apiHeaders() {
-  return extraHeaders();
 }

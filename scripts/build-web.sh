@@ -3,7 +3,11 @@
 set -euo pipefail
 source "$(dirname "$0")/env.sh"
 cd "$ROOT"
-rm -rf dist.tmp
-CI=1 EXPO_OFFLINE=1 EXPO_NO_TELEMETRY=1 npx expo export --platform web --output-dir dist.tmp
+TMP="dist.tmp.$$"
+trap 'rm -rf "$TMP"' EXIT
+CI=1 EXPO_OFFLINE=1 EXPO_NO_TELEMETRY=1 npx expo export --platform web --output-dir "$TMP"
 # Swap in one step so a server never serves a half-written build.
-rm -rf dist.old; [ -d dist ] && mv dist dist.old; mv dist.tmp dist; rm -rf dist.old
+OLD="dist.old.$$"
+[ -d dist ] && mv dist "$OLD"
+mv "$TMP" dist
+rm -rf "$OLD"

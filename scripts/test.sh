@@ -15,10 +15,11 @@ ensure_web_build
 
 export NODE_ENV=test BAYWALK_DB_NAME="$TEST_DB"
 mkdir -p test-artifacts
-rm -f test-artifacts/vitest.json
-npx vitest run --reporter=default --reporter=json --outputFile.json=test-artifacts/vitest.json "$@"
+REPORT="test-artifacts/vitest-$TEST_DB.json"
+rm -f "$REPORT"
+npx vitest run --reporter=default --reporter=json --outputFile.json="$REPORT" "$@"
 status=$?
-npx tsx tests/support/summary.ts test-artifacts/vitest.json
+npx tsx tests/support/summary.ts "$REPORT"
 summary=$?
 [ $status -eq 0 ] && [ $summary -eq 0 ] && exit 0
 exit 1

@@ -1,4 +1,5 @@
-import express from 'express';
+import express, { type RequestHandler } from 'express';
+import type { PassportStatic } from 'passport';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
 import type { Knex } from 'knex';
@@ -10,6 +11,9 @@ import { mountRoutes } from './http/route-table';
 import { accessGuard } from './http/access';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { mountStaticSite } from './http/static-site';
+import { sessionMiddleware } from './auth/session';
+import { createPassport } from './auth/passport-setup';
+import { csrfGuard } from './http/csrf';
 
 export interface AppDeps {
   config: Config;
@@ -43,13 +47,28 @@ export function createApp(deps: AppDeps) {
   );
   app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => !req.url?.startsWith('/api') } }));
 
+  const passport = createPassport(knex);
   const api = express.Router();
   api.use(express.json({ limit: '256kb' }));
-  mountRoutes(api, apiRoutes(services), accessGuard);
+  api.use(csrfGuard);
+  // Health answers even when the session store (the database) is down.
+  const withSession = [sessionMiddleware(knex, config), passport.initialize(), passport.session()];
+  api.use((req, res, next) => (req.path === '/health' ? next() : runAll(withSession, req, res, next)));
+  mountRoutes(api, apiRoutes(services, passport as unknown as PassportStatic), accessGuard);
   api.use(apiNotFound);
   app.use('/api', api);
 
   if (deps.serveWeb) mountStaticSite(app, config.distDir);
   app.use(errorHandler);
   return { app, services, logger };
+}
+
+/** Runs middleware in order, stopping at the first error. */
+function runAll(chain: RequestHandler[], req: Parameters<RequestHandler>[0], res: Parameters<RequestHandler>[1], done: (err?: unknown) => void) {
+  let i = 0;
+  const step = (err?: unknown) => {
+    if (err || i === chain.length) return done(err);
+    chain[i++](req, res, step);
+  };
+  step();
 }

@@ -1,6 +1,7 @@
 import type { Knex } from 'knex';
 
-export type Role = 'owner' | 'lead' | 'tech' | 'support';
+import type { Role } from '@/shared/roles';
+export type { Role };
 
 export interface UserRow {
   id: number;
@@ -26,6 +27,16 @@ export function createUserRepository(knex: Knex) {
     },
     async findInShop(shopId: number, id: number): Promise<UserRow | undefined> {
       return knex<UserRow>('users').where({ shop_id: shopId, id }).first();
+    },
+    /** Loads the person behind a session with their shop's name, or undefined. */
+    async findForSession(id: number): Promise<(UserRow & { shop_name: string }) | undefined> {
+      return knex('users')
+        .join('shops', 'shops.id', 'users.shop_id')
+        .where('users.id', id)
+        .first('users.*', 'shops.name as shop_name');
+    },
+    async markSignedIn(id: number): Promise<void> {
+      await knex('users').where({ id }).update({ last_sign_in_at: knex.fn.now(3) });
     },
   };
 }

@@ -1,8 +1,10 @@
 import type { RouteDef } from '../http/route-table';
 import type { Services } from '../services';
+import type { PassportStatic } from 'passport';
 import { healthRoutes } from './health-routes';
+import { authRoutes } from './auth-routes';
 
 /** The whole API route table, paths relative to /api. Tests walk this list. */
-export function apiRoutes(s: Services): RouteDef[] {
-  return [...healthRoutes(s)];
+export function apiRoutes(s: Services, passport: PassportStatic): RouteDef[] {
+  return [...healthRoutes(s), ...authRoutes(s, passport)];
 }

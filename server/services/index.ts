@@ -1,11 +1,13 @@
 import type { Knex } from 'knex';
 import type { Config } from '../config';
 import { createHealthService } from './health-service';
+import { createAuthService } from './auth-service';
 
 /** Everything the routes call, built once per app. Services never see req/res. */
 export function createServices(deps: { knex: Knex; config: Config }) {
   return {
     health: createHealthService(deps.knex),
+    auth: createAuthService(deps.knex),
   };
 }
 
