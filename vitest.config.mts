@@ -29,6 +29,16 @@ export default defineConfig({
       {
         extends: true,
         test: {
+          name: 'scripts',
+          environment: 'node',
+          include: ['tests/scripts/**/*.test.ts'],
+          testTimeout: 120_000,
+          fileParallelism: false,
+        },
+      },
+      {
+        extends: true,
+        test: {
           name: 'e2e',
           environment: 'node',
           include: ['tests/e2e/**/*.test.ts'],

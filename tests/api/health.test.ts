@@ -3,6 +3,7 @@ import request from 'supertest';
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
+import { sign } from 'cookie-signature';
 import { loadConfig } from '@/server/config';
 import { createTestApp } from '../support/test-app';
 
@@ -40,6 +41,15 @@ describe('when the database is down', () => {
     expect(res.body.database.message).toMatch(/database is not answering/i);
     const again = await request(t.app).get('/api/health');
     expect(again.status).toBe(503);
+  });
+
+  it('requests that need the database answer 503 with a message, not a crash', async () => {
+    // A correctly signed session cookie makes the server read the session store.
+    const signed = 's:' + sign('some-session-id', t.config.sessionSecret);
+    const res = await request(t.app).get('/api/auth/me').set('Cookie', `baywalk.sid=${encodeURIComponent(signed)}`);
+    expect(res.status).toBe(503);
+    expect(res.body.error.code).toBe('database_unavailable');
+    expect(res.body.error.message).toMatch(/saved work is safe/);
   });
 });
 
