@@ -45,7 +45,17 @@ export function createApp(deps: AppDeps) {
       strictTransportSecurity: config.secureCookies,
     }),
   );
-  app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => !req.url?.startsWith('/api') } }));
+  app.use(
+    pinoHttp({
+      logger,
+      autoLogging: { ignore: (req) => !req.url?.startsWith('/api') },
+      // One short line per request: no headers, so no cookies in the log.
+      serializers: {
+        req: (req: { id: unknown; method: string; url: string }) => ({ id: req.id, method: req.method, url: req.url }),
+        res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
+      },
+    }),
+  );
 
   const passport = createPassport(knex);
   const api = express.Router();

@@ -28,7 +28,7 @@ async function main() {
     closing = true;
     server.close(() => void knex.destroy().finally(() => process.exit(0)));
     server.closeAllConnections?.();
-    setTimeout(() => process.exit(0), 3000).unref();
+    (setTimeout(() => process.exit(0), 3000) as unknown as NodeJS.Timeout).unref();
   };
   process.on('SIGINT', stop);
   process.on('SIGTERM', stop);

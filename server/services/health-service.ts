@@ -14,7 +14,7 @@ export function createHealthService(knex: Knex, startedAt = Date.now()) {
       try {
         const { version } = await Promise.race([
           repo.ping(),
-          new Promise<never>((_, reject) => setTimeout(() => reject(new Error('timeout')), DB_TIMEOUT_MS).unref()),
+          new Promise<never>((_, reject) => (setTimeout(() => reject(new Error('timeout')), DB_TIMEOUT_MS) as unknown as NodeJS.Timeout).unref()),
         ]);
         return { status: 'ok', server, database: { ok: true, version, latencyMs: Date.now() - started } };
       } catch {
