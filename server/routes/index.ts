@@ -3,8 +3,9 @@ import type { Services } from '../services';
 import type { PassportStatic } from 'passport';
 import { healthRoutes } from './health-routes';
 import { authRoutes } from './auth-routes';
+import { jobRoutes } from './job-routes';
 
 /** The whole API route table, paths relative to /api. Tests walk this list. */
 export function apiRoutes(s: Services, passport: PassportStatic): RouteDef[] {
-  return [...healthRoutes(s), ...authRoutes(s, passport)];
+  return [...healthRoutes(s), ...authRoutes(s, passport), ...jobRoutes(s)];
 }

@@ -2,12 +2,14 @@ import type { Knex } from 'knex';
 import type { Config } from '../config';
 import { createHealthService } from './health-service';
 import { createAuthService } from './auth-service';
+import { createJobService } from './job-service';
 
 /** Everything the routes call, built once per app. Services never see req/res. */
 export function createServices(deps: { knex: Knex; config: Config }) {
   return {
     health: createHealthService(deps.knex),
     auth: createAuthService(deps.knex),
+    jobs: createJobService(deps.knex),
   };
 }
 
