@@ -104,7 +104,7 @@ export const stepMetaSchema = z.discriminatedUnion('kind', [
       reason: z.string().min(1, 'Say why.').max(1000),
     }),
   }),
-]);
+], { message: 'Set "kind" to ask, reading, action, cause or refer.' });
 export type StepMeta = z.infer<typeof stepMetaSchema>;
 
 const verdictValues = [...new Set(Object.values(VERDICTS).flat())] as [string, ...string[]];
@@ -114,7 +114,12 @@ export const transitionSchema = z.object({
   /** For answers: the label on the button. */
   description: z.string().min(1).max(120).optional(),
   /** For reading steps: which verdict takes this branch. */
-  guard: z.object({ type: z.literal('verdict'), params: z.object({ is: z.enum(verdictValues) }) }).optional(),
+  guard: z
+    .object({
+      type: z.literal('verdict', { message: 'A branch is chosen by the reading\'s verdict only: use "type": "verdict".' }),
+      params: z.object({ is: z.enum(verdictValues, { message: `Use a verdict the readings check gives: ${verdictValues.join(', ')}.` }) }),
+    })
+    .optional(),
 });
 export type TransitionDef = z.infer<typeof transitionSchema>;
 

@@ -36,7 +36,7 @@ export function stepFindings(id: string, state: StateDef): Finding[] {
   }
 
   if (kind === 'ask') {
-    const labels = new Map<string, string>();
+    const labels = new Map<string, { event: string; label: string }>();
     for (const [event, def] of Object.entries(state.on ?? {})) {
       if (!ANSWER_EVENT.test(event)) {
         err('bad_answer_event', `the answer "${event}" must be named like "answer.yes" or "answer.hose-split" (lower-case words and hyphens after "answer.").`);
@@ -52,10 +52,10 @@ export function stepFindings(id: string, state: StateDef): Finding[] {
         }
         const key = label.toLowerCase();
         const other = labels.get(key);
-        if (other && other !== event) {
-          err('duplicate_label', `two answers ("${other}" and "${event}") are both labelled "${label}"; the technician cannot tell them apart.`);
+        if (other && other.event !== event) {
+          err('duplicate_label', `two answers ("${other.event}" and "${event}") are both labelled "${other.label}"; the technician cannot tell them apart.`);
         }
-        labels.set(key, event);
+        if (!other) labels.set(key, { event, label });
       }
     }
   }

@@ -85,6 +85,8 @@ function graphFindings(doc: TreeDoc): Finding[] {
   const trapped = new Set<string>();
   for (const group of loops(doc)) {
     if (!reachable.has(group[0]) || group.some((id) => canFinish.has(id))) continue;
+    // Name the loop by the step a walk meets first.
+    group.sort((a, b) => reachable.get(a)! - reachable.get(b)!);
     group.forEach((id) => trapped.add(id));
     const names = group.map((id) => `"${id}"`).join(', ');
     out.push({
