@@ -3,9 +3,10 @@ import type { Services } from '../services';
 import type { PassportStatic } from 'passport';
 import { healthRoutes } from './health-routes';
 import { authRoutes } from './auth-routes';
+import { readingsRoutes } from './readings-routes';
 import { jobRoutes } from './job-routes';
 
 /** The whole API route table, paths relative to /api. Tests walk this list. */
 export function apiRoutes(s: Services, passport: PassportStatic): RouteDef[] {
-  return [...healthRoutes(s), ...authRoutes(s, passport), ...jobRoutes(s)];
+  return [...healthRoutes(s), ...authRoutes(s, passport), ...readingsRoutes(s), ...jobRoutes(s)];
 }

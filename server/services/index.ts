@@ -2,6 +2,7 @@ import type { Knex } from 'knex';
 import type { Config } from '../config';
 import { createHealthService } from './health-service';
 import { createAuthService } from './auth-service';
+import { createReadingsService } from './readings-service';
 import { createJobService } from './job-service';
 
 /** Everything the routes call, built once per app. Services never see req/res. */
@@ -9,6 +10,7 @@ export function createServices(deps: { knex: Knex; config: Config }) {
   return {
     health: createHealthService(deps.knex),
     auth: createAuthService(deps.knex),
+    readings: createReadingsService(),
     jobs: createJobService(deps.knex),
   };
 }

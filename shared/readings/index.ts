@@ -13,3 +13,4 @@ export * from './obd';
 export * from './cautions';
 export * from './verdict-labels';
 export * from './judge-reading';
+export * from './readings-check';
