@@ -3,11 +3,16 @@ import { hashPassword } from '../auth/passwords';
 import { createShopRepository } from '../repositories/shop-repository';
 import { createUserRepository } from '../repositories/user-repository';
 import { DEMO_PASSWORD, DEMO_PEOPLE, DEMO_SHOP } from './demo-people';
+import { installStockTreesInAllShops } from '../services/tree-stock';
 
-/** Loads the demo shop when the database has no shop yet. Returns whether it seeded. */
+/** Loads the demo shop when the database has no shop yet, and gives every shop the stock trees it lacks. Returns whether it seeded. */
 export async function seedDemoIfEmpty(knex: Knex): Promise<boolean> {
   const shops = createShopRepository(knex);
-  if ((await shops.count()) > 0) return false;
+  if ((await shops.count()) > 0) {
+    // Shops made before a stock tree shipped get it on the next start (idempotent).
+    await installStockTreesInAllShops(knex);
+    return false;
+  }
   const users = createUserRepository(knex);
   const hash = await hashPassword(DEMO_PASSWORD);
   await knex.transaction(async (trx) => {
@@ -16,6 +21,7 @@ export async function seedDemoIfEmpty(knex: Knex): Promise<boolean> {
       await users.create({ shop_id: shopId, email: person.email, name: person.name, role: person.role, password_hash: hash }, trx);
     }
   });
+  await installStockTreesInAllShops(knex);
   return true;
 }
 

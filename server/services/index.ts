@@ -4,6 +4,7 @@ import { createHealthService } from './health-service';
 import { createAuthService } from './auth-service';
 import { createReadingsService } from './readings-service';
 import { createJobService } from './job-service';
+import { createTreeService } from './tree-service';
 
 /** Everything the routes call, built once per app. Services never see req/res. */
 export function createServices(deps: { knex: Knex; config: Config }) {
@@ -12,6 +13,7 @@ export function createServices(deps: { knex: Knex; config: Config }) {
     auth: createAuthService(deps.knex),
     readings: createReadingsService(),
     jobs: createJobService(deps.knex),
+    trees: createTreeService(deps.knex),
   };
 }
 
