@@ -12,6 +12,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     port: Number(env.PORT ?? 8080),
     host: env.HOST ?? '127.0.0.1',
     distDir: env.BAYWALK_DIST_DIR ?? path.join(root, 'dist'),
+    /** Where the local photo store keeps files (an S3-compatible store can replace it). */
+    photosDir: env.BAYWALK_PHOTOS_DIR ?? path.join(dataDir, 'photos'),
     /** Set when the app is served over HTTPS so cookies get `secure`. */
     secureCookies: env.BAYWALK_SECURE_COOKIES === '1',
     sessionSecret: env.BAYWALK_SESSION_SECRET ?? 'baywalk-local-development-secret',

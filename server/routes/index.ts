@@ -5,9 +5,11 @@ import { healthRoutes } from './health-routes';
 import { authRoutes } from './auth-routes';
 import { readingsRoutes } from './readings-routes';
 import { jobRoutes } from './job-routes';
+import { walkRoutes } from './walk-routes';
+import { photoRoutes } from './photo-routes';
 import { treeRoutes } from './tree-routes';
 
 /** The whole API route table, paths relative to /api. Tests walk this list. */
 export function apiRoutes(s: Services, passport: PassportStatic): RouteDef[] {
-  return [...healthRoutes(s), ...authRoutes(s, passport), ...readingsRoutes(s), ...jobRoutes(s), ...treeRoutes(s)];
+  return [...healthRoutes(s), ...authRoutes(s, passport), ...readingsRoutes(s), ...jobRoutes(s), ...walkRoutes(s), ...photoRoutes(s), ...treeRoutes(s)];
 }

@@ -4,6 +4,9 @@ import { createHealthService } from './health-service';
 import { createAuthService } from './auth-service';
 import { createReadingsService } from './readings-service';
 import { createJobService } from './job-service';
+import { createPhotoService } from './photo-service';
+import { createWalkService } from './walk-service';
+import { createPhotoStore } from '../photos';
 import { createTreeService } from './tree-service';
 
 /** Everything the routes call, built once per app. Services never see req/res. */
@@ -13,6 +16,8 @@ export function createServices(deps: { knex: Knex; config: Config }) {
     auth: createAuthService(deps.knex),
     readings: createReadingsService(),
     jobs: createJobService(deps.knex),
+    photos: createPhotoService(deps.knex, createPhotoStore(deps.config)),
+    walks: createWalkService(deps.knex, createPhotoService(deps.knex, createPhotoStore(deps.config))),
     trees: createTreeService(deps.knex),
   };
 }

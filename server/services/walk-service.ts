@@ -1,0 +1,271 @@
+import type { Knex } from 'knex';
+import { applyEvent, parseTree, replayWalk, shortestToCause, TreeEngineError, type WalkContext, type WalkEvent } from '@/trees/engine';
+import type { TreeDoc } from '@/trees/tree-format';
+import type { WalkDetail, WalkFinish, WalkPhoto, WalkPosition, WalkStepAnswer, WalkSummary } from '@/shared/schemas/walks';
+import { createWalkRepository, type WalkRow, type WalkStepRow } from '../repositories/walk-repository';
+import { createWalkTreeRepository, type PinnedTree } from '../repositories/walk-tree-repository';
+import { createJobRepository } from '../repositories/job-repository';
+import { AppError, badRequest, conflict, notFound } from '../errors';
+import type { PhotoService } from './photo-service';
+import { toJob } from './job-service';
+import { effectiveSteps, liveEvents, timeSpentSeconds, toStepRecord, toWalkPhoto, toWalkSummary } from './walk-records';
+
+/** Who is acting: a signed-in person of a shop. */
+export interface Actor {
+  id: number;
+  shopId: number;
+}
+
+const finishedRefusal = () => conflict('This walk is finished, so it can no longer change. Start a new walk to look again.');
+
+// Published versions never change, so their parsed documents can be kept (bounded).
+const docCache = new Map<number, TreeDoc>();
+function parsedDoc(tree: PinnedTree): TreeDoc {
+  const hit = docCache.get(tree.versionId);
+  if (hit) return hit;
+  const parsed = parseTree(tree.doc);
+  if (!parsed.ok) throw new AppError(409, 'tree_invalid', `The tree "${tree.title}" (version ${tree.version}) no longer passes its checks, so it cannot be walked. Ask a lead to publish a fixed version.`);
+  if (docCache.size > 200) docCache.delete(docCache.keys().next().value!);
+  docCache.set(tree.versionId, parsed.doc);
+  return parsed.doc;
+}
+
+const contextOf = (w: WalkRow): WalkContext => ({ altitudeM: w.altitude_m, ...(w.baro_kpa !== null ? { baroKpa: w.baro_kpa } : {}) });
+
+/** Walks: start on a job, record answers that the pinned tree accepts, undo, photos, finish. */
+export function createWalkService(knex: Knex, photos: PhotoService) {
+  const walks = createWalkRepository(knex);
+  const trees = createWalkTreeRepository(knex);
+  const jobs = createJobRepository(knex);
+
+  async function pinned(shopId: number, w: WalkRow): Promise<{ tree: PinnedTree; doc: TreeDoc }> {
+    const tree = await trees.version(shopId, w.tree_version_id);
+    if (!tree) throw notFound('The tree version of this walk');
+    return { tree, doc: parsedDoc(tree) };
+  }
+
+  function positionOf(doc: TreeDoc, steps: readonly WalkStepRow[], ctx: WalkContext): WalkPosition {
+    const events = liveEvents(steps);
+    let pos;
+    try {
+      pos = replayWalk(doc, events, ctx);
+    } catch (err) {
+      if (err instanceof TreeEngineError) throw conflict(`This walk's recorded answers no longer fit its tree: ${err.message}`);
+      throw err;
+    }
+    return { ...pos, stepsTaken: events.length, shortestToCause: shortestToCause(doc, pos.stepId) };
+  }
+
+  async function findOpenLocked(trx: Knex.Transaction, actor: Actor, walkId: number) {
+    const w = await walks.lock(trx, actor.shopId, walkId);
+    if (!w) throw notFound('That walk');
+    return w;
+  }
+
+  /** Returns the answer for a step id already recorded (a retry), or throws if the id was used elsewhere. */
+  async function earlier(trx: Knex.Transaction, walkId: number, stepId: string, kind: 'event' | 'undo') {
+    const row = await walks.findStep(trx, stepId);
+    if (!row) return undefined;
+    if (row.walk_id !== walkId || row.kind !== kind) throw conflict('That step id was already used for something else. Reload the walk and try again.');
+    return row;
+  }
+
+  async function answer(trx: Knex.Transaction, actor: Actor, w: WalkRow, stepRow: WalkStepRow): Promise<WalkStepAnswer> {
+    const { doc } = await pinned(actor.shopId, w);
+    const steps = await walks.steps(w.id, trx);
+    const { undone } = effectiveSteps(steps);
+    const recorded = steps.find((s) => s.id === stepRow.id) ?? stepRow;
+    return { step: toStepRecord(recorded, undone), position: positionOf(doc, steps, contextOf(w)) };
+  }
+
+  return {
+    /** Starts a walk on a job, pinned to the tree's latest published version and the shop's altitude now. */
+    async start(actor: Actor, input: { jobId: number; treeId: number }): Promise<WalkSummary> {
+      const job = await jobs.findById(actor.shopId, input.jobId);
+      if (!job) throw notFound('That job');
+      const tree = await trees.latestPublished(actor.shopId, input.treeId);
+      if (!tree) throw conflict('That tree has no published version yet, so it cannot be walked. Pick another tree or ask a lead to publish it.');
+      const doc = parsedDoc(tree);
+      const shop = await walks.shop(actor.shopId);
+      const id = await walks.insert({
+        shop_id: actor.shopId,
+        job_id: job.id,
+        tree_id: tree.treeId,
+        tree_version_id: tree.versionId,
+        altitude_m: shop?.altitude_m ?? 0,
+        baro_kpa: null,
+        started_by: actor.id,
+        current_step: doc.machine.initial,
+      });
+      return toWalkSummary((await walks.find(actor.shopId, id))!, tree);
+    },
+
+    /** Everything the walk screen and the report need, replayed from the records. */
+    async get(shopId: number, walkId: number): Promise<WalkDetail> {
+      const w = await walks.find(shopId, walkId);
+      if (!w) throw notFound('That walk');
+      const { tree, doc } = await pinned(shopId, w);
+      const [steps, photoRows, shop, job] = await Promise.all([
+        walks.steps(w.id),
+        walks.photos(w.id),
+        walks.shop(shopId),
+        w.job_id ? jobs.findById(shopId, w.job_id) : undefined,
+      ]);
+      const { undone } = effectiveSteps(steps);
+      return {
+        walk: toWalkSummary(w, tree),
+        job: job ? toJob(job) : null,
+        shop: { name: shop?.name ?? '', pressureUnit: shop?.pressure_unit ?? 'inHg' },
+        doc,
+        position: positionOf(doc, steps, contextOf(w)),
+        history: steps.map((s) => toStepRecord(s, undone)),
+        photos: photoRows.map(toWalkPhoto),
+      };
+    },
+
+    async listForJob(shopId: number, jobId: number): Promise<WalkSummary[]> {
+      if (!(await jobs.findById(shopId, jobId))) throw notFound('That job');
+      const rows = await walks.listForJob(shopId, jobId);
+      const out: WalkSummary[] = [];
+      for (const w of rows) out.push(toWalkSummary(w, (await pinned(shopId, w)).tree));
+      return out;
+    },
+
+    /**
+     * Records one answer in one transaction: lock the walk, return the earlier
+     * answer if this step id was already recorded, replay the pinned tree, and
+     * append the step only if the tree accepts the event.
+     */
+    async step(actor: Actor, walkId: number, input: { stepId: string; event: WalkEvent; note: string | null }): Promise<WalkStepAnswer> {
+      return knex.transaction(async (trx) => {
+        const w = await findOpenLocked(trx, actor, walkId);
+        const seen = await earlier(trx, w.id, input.stepId, 'event');
+        if (seen) return answer(trx, actor, w, seen);
+        if (w.status !== 'open') throw finishedRefusal();
+        const { doc } = await pinned(actor.shopId, w);
+        const steps = await walks.steps(w.id, trx);
+        const events = liveEvents(steps);
+        const ctx = contextOf(w);
+        const from = positionOf(doc, steps, ctx);
+        const result = applyEvent(doc, events, input.event, ctx);
+        if (!result.ok) throw new AppError(409, 'step_refused', result.reason);
+        const reading = input.event.type === 'reading' ? (input.event as Extract<WalkEvent, { type: 'reading' }>) : undefined;
+        const row: Omit<WalkStepRow, 'created_at' | 'user_name'> = {
+          id: input.stepId,
+          walk_id: w.id,
+          shop_id: actor.shopId,
+          seq: (steps.at(-1)?.seq ?? 0) + 1,
+          kind: 'event',
+          event: input.event,
+          undoes_step_id: null,
+          from_step: from.stepId,
+          to_step: result.stepId,
+          verdict: result.verdict ?? null,
+          reading_value: reading ? reading.value : null,
+          reading_unit: reading ? (reading.unit ?? result.judgement?.expected?.unit ?? null) : null,
+          judgement: result.judgement ?? null,
+          note: input.note,
+          user_id: actor.id,
+        };
+        await walks.insertStep(trx, row);
+        await walks.update(trx, actor.shopId, w.id, { current_step: result.stepId, step_count: events.length + 1, last_step_at: trx.fn.now(3) });
+        return answer(trx, actor, w, { ...row, created_at: new Date() });
+      });
+    },
+
+    /** Takes back the latest answer still in force, as a record of its own. */
+    async undo(actor: Actor, walkId: number, input: { stepId: string }): Promise<WalkStepAnswer> {
+      return knex.transaction(async (trx) => {
+        const w = await findOpenLocked(trx, actor, walkId);
+        const seen = await earlier(trx, w.id, input.stepId, 'undo');
+        if (seen) return answer(trx, actor, w, seen);
+        if (w.status !== 'open') throw finishedRefusal();
+        const { doc } = await pinned(actor.shopId, w);
+        const steps = await walks.steps(w.id, trx);
+        const { live } = effectiveSteps(steps);
+        const last = live.at(-1);
+        if (!last) throw conflict('There is nothing to undo: this walk is at its first step.');
+        const from = positionOf(doc, steps, contextOf(w));
+        const row: Omit<WalkStepRow, 'created_at' | 'user_name'> = {
+          id: input.stepId,
+          walk_id: w.id,
+          shop_id: actor.shopId,
+          seq: steps.at(-1)!.seq + 1,
+          kind: 'undo',
+          event: null,
+          undoes_step_id: last.id,
+          from_step: from.stepId,
+          to_step: last.from_step,
+          verdict: null,
+          reading_value: null,
+          reading_unit: null,
+          judgement: null,
+          note: null,
+          user_id: actor.id,
+        };
+        await walks.insertStep(trx, row);
+        await walks.update(trx, actor.shopId, w.id, { current_step: last.from_step, step_count: live.length - 1, last_step_at: trx.fn.now(3) });
+        return answer(trx, actor, w, { ...row, created_at: new Date() });
+      });
+    },
+
+    /** Closes a walk with its outcome; the cause comes from the cause step reached, or from the words given. */
+    async finish(actor: Actor, walkId: number, input: { outcome: WalkFinish['outcome']; causeText: string | null; note: string | null }): Promise<void> {
+      await knex.transaction(async (trx) => {
+        const w = await findOpenLocked(trx, actor, walkId);
+        if (w.status !== 'open') throw finishedRefusal();
+        const { doc } = await pinned(actor.shopId, w);
+        const steps = await walks.steps(w.id, trx);
+        const pos = positionOf(doc, steps, contextOf(w));
+        const meta = doc.machine.states[pos.stepId].meta;
+        let cause: { cause_step: string | null; cause_code: string | null; cause_text: string | null };
+        if (meta.kind === 'cause') cause = { cause_step: pos.stepId, cause_code: meta.cause.code, cause_text: input.causeText ?? meta.title };
+        else if (meta.kind === 'refer') cause = { cause_step: pos.stepId, cause_code: null, cause_text: input.causeText ?? `${meta.refer.to}: ${meta.refer.reason}` };
+        else {
+          if (input.outcome === 'fixed' && !input.causeText) {
+            throw badRequest('This walk did not reach a cause step: say in a few words what the cause was.', { fields: { causeText: 'Say what the cause was.' } });
+          }
+          cause = { cause_step: null, cause_code: null, cause_text: input.causeText };
+        }
+        const now = new Date();
+        await walks.update(trx, actor.shopId, w.id, {
+          ...cause,
+          status: 'finished',
+          outcome: input.outcome,
+          finish_note: input.note,
+          finished_by: actor.id,
+          finished_at: now,
+          time_spent_s: timeSpentSeconds(w.started_at, steps.map((s) => s.created_at), now),
+        });
+      });
+    },
+
+    /** Adds a photo at a step of an open walk; refused photos leave nothing behind. */
+    async addPhoto(actor: Actor, walkId: number, bytes: Buffer, fields: { step: string; caption?: string }): Promise<WalkPhoto> {
+      const w = await walks.find(actor.shopId, walkId);
+      if (!w) throw notFound('That walk');
+      if (w.status !== 'open') throw finishedRefusal();
+      const { doc } = await pinned(actor.shopId, w);
+      if (!doc.machine.states[fields.step]) throw badRequest(`This tree has no step "${fields.step}".`, { fields: { step: 'Unknown step.' } });
+      const saved = await photos.save(actor.shopId, actor.id, bytes, async (trx, photoId) => {
+        const locked = await findOpenLocked(trx, actor, walkId);
+        if (locked.status !== 'open') throw finishedRefusal();
+        const atSeq = await walks.recordCount(trx, walkId);
+        await walks.linkPhoto(trx, { photo_id: photoId, walk_id: walkId, shop_id: actor.shopId, step_id: fields.step, at_seq: atSeq, caption: fields.caption || null });
+      });
+      const link = await walks.findPhotoLink(actor.shopId, walkId, saved.id);
+      return toWalkPhoto({ ...link!, width: saved.width, height: saved.height });
+    },
+
+    /** Removes a photo from an open walk (and deletes it). */
+    async removePhoto(actor: Actor, walkId: number, photoId: string): Promise<void> {
+      const w = await walks.find(actor.shopId, walkId);
+      if (!w) throw notFound('That walk');
+      if (w.status !== 'open') throw finishedRefusal();
+      if (!(await walks.findPhotoLink(actor.shopId, walkId, photoId))) throw notFound('That photo');
+      await photos.remove(actor.shopId, photoId);
+    },
+  };
+}
+
+export type WalkService = ReturnType<typeof createWalkService>;
