@@ -2,6 +2,7 @@ import type { Knex } from 'knex';
 import type { Config } from '../config';
 import { createHealthService } from './health-service';
 import { createAuthService } from './auth-service';
+import { createShopService } from './shop-service';
 import { createReadingsService } from './readings-service';
 import { createJobService } from './job-service';
 import { createPhotoService } from './photo-service';
@@ -14,6 +15,7 @@ export function createServices(deps: { knex: Knex; config: Config }) {
   return {
     health: createHealthService(deps.knex),
     auth: createAuthService(deps.knex),
+    shop: createShopService(deps.knex),
     readings: createReadingsService(),
     jobs: createJobService(deps.knex),
     photos: createPhotoService(deps.knex, createPhotoStore(deps.config)),

@@ -59,7 +59,7 @@ export function assessReadings(input: ReadingsCheckInput): ReadingsAssessment {
   if (baro && (input.vacuum || input.map)) {
     const reading = input.vacuum ? 'vacuum' : 'map';
     const r = (input.vacuum ?? input.map)!;
-    vacuum = attempt(() => judgeIdleVacuum({ reading, value: r.value, unit: r.unit, profile: input.profile, needle: input.needle }, { baroKpa: baro.kPa }));
+    vacuum = attempt(() => judgeIdleVacuum({ reading, value: r.value, unit: r.unit, profile: input.profile, needle: input.needle }, baroCtx(baro)));
   }
 
   let trims: FuelTrimJudgement | undefined;
@@ -85,6 +85,13 @@ export function checkReadings(input: ReadingsCheckInput): ReadingsCheckResult {
   const [field] = Object.keys(errors);
   if (field) throw new ReadingError(field, errors[field]);
   return result!;
+}
+
+/** The context that reproduces the resolved pressure, so the judgement names its true source. */
+function baroCtx(baro: ReadingsCheckResult['baro']): { altitudeM?: number; baroKpa?: number } {
+  if (baro.source === 'measured') return { baroKpa: baro.kPa };
+  if (baro.source === 'altitude') return { altitudeM: baro.altitudeM };
+  return {};
 }
 
 function resolveBaro(input: ReadingsCheckInput): ReadingsCheckResult['baro'] {
