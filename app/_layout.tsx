@@ -4,9 +4,14 @@ import { Slot } from 'expo-router';
 import { useFonts } from 'expo-font';
 import { QueryClientProvider } from '@tanstack/react-query';
 import { createQueryClient } from '@/hooks/query-client';
+import { SessionGate } from '@/components/auth/session-gate';
 import { colors, fonts } from '@/components/theme';
 
-/** Root layout: shipped fonts and the query client for every screen. */
+/**
+ * Root layout: shipped fonts, the query client, and the sign-in gate, declared
+ * here once for every screen: `(app)` screens need a session, `(auth)` screens
+ * are for signing in (rules in components/auth/gate-rules.ts).
+ */
 export default function RootLayout() {
   const [queryClient] = useState(createQueryClient);
   const [loaded, error] = useFonts({
@@ -24,7 +29,9 @@ export default function RootLayout() {
   }
   return (
     <QueryClientProvider client={queryClient}>
-      <Slot />
+      <SessionGate>
+        <Slot />
+      </SessionGate>
     </QueryClientProvider>
   );
 }

@@ -21,6 +21,9 @@ export function createShopRepository(knex: Knex) {
     async findById(id: number): Promise<ShopRow | undefined> {
       return knex<ShopRow>('shops').where({ id }).first();
     },
+    async update(id: number, patch: Partial<Pick<ShopRow, 'name' | 'altitude_m' | 'pressure_unit' | 'comeback_window_days'>>): Promise<void> {
+      await knex('shops').where({ id }).update(patch);
+    },
     async count(): Promise<number> {
       const row = await knex('shops').count<{ n: number }[]>({ n: '*' }).first();
       return Number(row?.n ?? 0);

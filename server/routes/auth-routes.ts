@@ -1,13 +1,27 @@
 import type { Request, Response, NextFunction } from 'express';
 import type { PassportStatic } from 'passport';
-import { signInSchema } from '@/shared/schemas/auth';
+import { signInSchema, signUpSchema, type SignUp } from '@/shared/schemas/auth';
 import type { RouteDef } from '../http/route-table';
 import type { SessionUser } from '../http/access';
 import type { Services } from '../services';
 import { AppError } from '../errors';
+import { endSession, startSession } from '../auth/start-session';
 
-/** Sign-in, sign-out and "who am I". */
+/** Sign-up, sign-in, sign-out and "who am I". */
 export const authRoutes = (s: Services, passport: PassportStatic): RouteDef[] => [
+  {
+    method: 'post',
+    path: '/auth/sign-up',
+    allow: 'public',
+    body: signUpSchema,
+    status: 201,
+    handler: async ({ req, body }) => {
+      const user = await s.auth.signUp(body as SignUp);
+      await startSession(req, user);
+      await s.auth.recordSignIn(user.id);
+      return { user: await s.auth.me(user.id) };
+    },
+  },
   {
     method: 'post',
     path: '/auth/sign-in',
@@ -16,8 +30,7 @@ export const authRoutes = (s: Services, passport: PassportStatic): RouteDef[] =>
     handler: async ({ req, res }) => {
       const user = await authenticate(passport, req, res);
       if (!user) throw new AppError(401, 'bad_credentials', 'That e-mail and password do not match an active account.');
-      // passport 0.7 regenerates the session id here (no session fixation).
-      await new Promise<void>((resolve, reject) => req.logIn(user, (err) => (err ? reject(err) : resolve())));
+      await startSession(req, user);
       await s.auth.recordSignIn(user.id);
       return { user: await s.auth.me(user.id) };
     },
@@ -27,8 +40,7 @@ export const authRoutes = (s: Services, passport: PassportStatic): RouteDef[] =>
     path: '/auth/sign-out',
     allow: 'public',
     handler: async ({ req, res }) => {
-      await new Promise<void>((resolve, reject) => req.logOut((err) => (err ? reject(err) : resolve())));
-      await new Promise<void>((resolve) => (req.session ? req.session.destroy(() => resolve()) : resolve()));
+      await endSession(req);
       res.clearCookie('baywalk.sid');
       return { user: null };
     },

@@ -1,0 +1,35 @@
+import type { Me } from '@/shared/schemas/auth';
+
+/** Auth screens only an anonymous person needs; a signed-in person is sent on. */
+const ANONYMOUS_ONLY = new Set(['sign-in', 'sign-up', 'forgot-password']);
+
+/** A `next` path is followed only when it stays on this site and is not an auth screen. */
+export function safeNext(next: unknown): string | undefined {
+  if (typeof next !== 'string' || !next.startsWith('/') || next.startsWith('//') || next.includes('\\')) return undefined;
+  const first = next.split(/[/?#]/)[1] ?? '';
+  if (ANONYMOUS_ONLY.has(first) || first === 'reset-password' || first === 'accept-invite') return undefined;
+  return next;
+}
+
+/**
+ * Where the sign-in gate sends a person, or undefined to stay.
+ * - signed-in screens (the `(app)` group) need a session: anonymous people go
+ *   to /sign-in, remembering where they were;
+ * - sign-in, sign-up and forgot-password are for anonymous people: a
+ *   signed-in person goes to `next` or home;
+ * - reset-password and accept-invite work either way (a link opened in a
+ *   browser where someone else is signed in), as do public pages.
+ * `user` undefined means "not known yet": never redirect on a guess.
+ */
+export function gateRedirect(input: { user: Me | null | undefined; segments: readonly string[]; pathname: string; next?: unknown }): string | undefined {
+  const { user, segments, pathname } = input;
+  if (user === undefined) return undefined;
+  const group = segments[0];
+  if (group === '(app)' && !user) {
+    return pathname && pathname !== '/' ? `/sign-in?next=${encodeURIComponent(pathname)}` : '/sign-in';
+  }
+  if (group === '(auth)' && user && ANONYMOUS_ONLY.has(segments[1] ?? '')) {
+    return safeNext(input.next) ?? '/';
+  }
+  return undefined;
+}
