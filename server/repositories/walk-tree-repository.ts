@@ -17,8 +17,8 @@ const parseJson = (v: unknown) => (typeof v === 'string' ? JSON.parse(v) : v);
  * a tree (to pin at start) and a pinned version by id. Scoped by shop.
  */
 export function createWalkTreeRepository(knex: Knex) {
-  const base = (shopId: number) =>
-    knex('tree_versions as v')
+  const base = (shopId: number, db: Knex = knex) =>
+    db('tree_versions as v')
       .join('trees as t', 't.id', 'v.tree_id')
       .where('t.shop_id', shopId)
       .select('v.id as version_id', 'v.tree_id', 'v.version', 'v.doc', 't.title', 't.symptom');
@@ -39,8 +39,8 @@ export function createWalkTreeRepository(knex: Knex) {
       );
     },
     /** A pinned version by id, whatever has been published since. */
-    async version(shopId: number, versionId: number): Promise<PinnedTree | undefined> {
-      return toPinned(await base(shopId).andWhere('v.id', versionId).andWhere('v.shop_id', shopId).first());
+    async version(shopId: number, versionId: number, db: Knex = knex): Promise<PinnedTree | undefined> {
+      return toPinned(await base(shopId, db).andWhere('v.id', versionId).andWhere('v.shop_id', shopId).first());
     },
   };
 }

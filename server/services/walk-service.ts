@@ -38,8 +38,9 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
   const trees = createWalkTreeRepository(knex);
   const jobs = createJobRepository(knex);
 
-  async function pinned(shopId: number, w: WalkRow): Promise<{ tree: PinnedTree; doc: TreeDoc }> {
-    const tree = await trees.version(shopId, w.tree_version_id);
+  // Inside a transaction, pass the transaction: a second pooled connection per request can starve the pool.
+  async function pinned(shopId: number, w: WalkRow, db: Knex = knex): Promise<{ tree: PinnedTree; doc: TreeDoc }> {
+    const tree = await trees.version(shopId, w.tree_version_id, db);
     if (!tree) throw notFound('The tree version of this walk');
     return { tree, doc: parsedDoc(tree) };
   }
@@ -71,7 +72,7 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
   }
 
   async function answer(trx: Knex.Transaction, actor: Actor, w: WalkRow, stepRow: WalkStepRow): Promise<WalkStepAnswer> {
-    const { doc } = await pinned(actor.shopId, w);
+    const { doc } = await pinned(actor.shopId, w, trx);
     const steps = await walks.steps(w.id, trx);
     const { undone } = effectiveSteps(steps);
     const recorded = steps.find((s) => s.id === stepRow.id) ?? stepRow;
@@ -142,7 +143,7 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
         const seen = await earlier(trx, w.id, input.stepId, 'event');
         if (seen) return answer(trx, actor, w, seen);
         if (w.status !== 'open') throw finishedRefusal();
-        const { doc } = await pinned(actor.shopId, w);
+        const { doc } = await pinned(actor.shopId, w, trx);
         const steps = await walks.steps(w.id, trx);
         const events = liveEvents(steps);
         const ctx = contextOf(w);
@@ -180,7 +181,7 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
         const seen = await earlier(trx, w.id, input.stepId, 'undo');
         if (seen) return answer(trx, actor, w, seen);
         if (w.status !== 'open') throw finishedRefusal();
-        const { doc } = await pinned(actor.shopId, w);
+        const { doc } = await pinned(actor.shopId, w, trx);
         const steps = await walks.steps(w.id, trx);
         const { live } = effectiveSteps(steps);
         const last = live.at(-1);
@@ -214,7 +215,7 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
       await knex.transaction(async (trx) => {
         const w = await findOpenLocked(trx, actor, walkId);
         if (w.status !== 'open') throw finishedRefusal();
-        const { doc } = await pinned(actor.shopId, w);
+        const { doc } = await pinned(actor.shopId, w, trx);
         const steps = await walks.steps(w.id, trx);
         const pos = positionOf(doc, steps, contextOf(w));
         const meta = doc.machine.states[pos.stepId].meta;
