@@ -56,6 +56,9 @@ export const readingsCheckRequestSchema = z
     }
   });
 
-export type ReadingsCheckRequest = z.infer<typeof readingsCheckRequestSchema>;
+/** What a client sends (profile may be left out: stock). */
+export type ReadingsCheckRequest = z.input<typeof readingsCheckRequestSchema>;
+/** What the server holds after validation. */
+export type ReadingsCheckParsed = z.output<typeof readingsCheckRequestSchema>;
 /** The answer: the same judgement the screen computes in the browser. */
 export type ReadingsCheckAnswer = ReadingsCheckResult;
