@@ -64,8 +64,30 @@ export const INSTALL_TYPE_LABELS: Record<InstallType, string> = {
 export const HAZARDS = ['fuel_pressure', 'hot_parts', 'moving_parts', 'exhaust_gas', 'fire', 'electrical', 'vehicle_support', 'chemicals', 'eye_protection'] as const;
 export type Hazard = (typeof HAZARDS)[number];
 
+/** The word shown beside each hazard's icon. */
+export const HAZARD_LABELS: Record<Hazard, string> = {
+  fuel_pressure: 'Fuel under pressure',
+  hot_parts: 'Hot parts',
+  moving_parts: 'Moving parts',
+  exhaust_gas: 'Exhaust gas',
+  fire: 'Fire risk',
+  electrical: 'Electrical',
+  vehicle_support: 'Vehicle support',
+  chemicals: 'Chemicals',
+  eye_protection: 'Eye protection',
+};
+
 export const STEP_KINDS = ['ask', 'reading', 'action', 'cause', 'refer'] as const;
 export type StepKind = (typeof STEP_KINDS)[number];
+
+/** The word shown beside each step kind's icon. */
+export const STEP_KIND_LABELS: Record<StepKind, string> = {
+  ask: 'Ask',
+  reading: 'Reading',
+  action: 'Action',
+  cause: 'Cause',
+  refer: 'Refer',
+};
 
 /** Step ids and event slugs: lower-case words joined by hyphens. */
 const stepId = z.string().regex(/^[a-z0-9]+(?:-[a-z0-9]+)*$/, 'Use lower-case letters, digits and hyphens, like "check-pcv-hose".').max(64);
