@@ -69,6 +69,22 @@ export const walkRoutes = (s: Services): RouteDef[] => [
     handler: async ({ req, params, body }) => ({ photo: await s.walks.addPhoto(actor(req), walkId(params), req.file!.buffer, body) }),
   },
   {
+    method: 'get',
+    path: '/walks/:id/report.pdf',
+    allow: WORKSHOP,
+    handler: async ({ req, res, params }) => {
+      const pdf = await s.reports.walkPdf(actor(req).shopId, walkId(params));
+      res.set({
+        'Content-Type': 'application/pdf',
+        'Content-Disposition': `attachment; filename="${pdf.filename}"`,
+        'Cache-Control': 'private, no-store',
+        'X-Content-Type-Options': 'nosniff',
+      });
+      res.status(200).send(pdf.data);
+      return undefined;
+    },
+  },
+  {
     method: 'delete',
     path: '/walks/:id/photos/:photoId',
     allow: WORKSHOP,

@@ -5,9 +5,7 @@ import { createAuthService } from './auth-service';
 import { createShopService } from './shop-service';
 import { createReadingsService } from './readings-service';
 import { createJobService } from './job-service';
-import { createPhotoService } from './photo-service';
-import { createWalkService } from './walk-service';
-import { createPhotoStore } from '../photos';
+import { createWalkBundle } from './walk-bundle';
 import { createTreeService } from './tree-service';
 
 /** Everything the routes call, built once per app. Services never see req/res. */
@@ -18,8 +16,7 @@ export function createServices(deps: { knex: Knex; config: Config }) {
     shop: createShopService(deps.knex),
     readings: createReadingsService(),
     jobs: createJobService(deps.knex),
-    photos: createPhotoService(deps.knex, createPhotoStore(deps.config)),
-    walks: createWalkService(deps.knex, createPhotoService(deps.knex, createPhotoStore(deps.config))),
+    ...createWalkBundle(deps.knex, deps.config),
     trees: createTreeService(deps.knex),
   };
 }

@@ -1,8 +1,10 @@
 import crypto from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import sharp from 'sharp';
 import { installStockTrees } from '@/server/services/tree-stock';
 import { createTestApp } from '../support/test-app';
 import { createShopWithPeople, signedIn, type TestShop } from '../support/people';
+import { pdfText } from '../support/pdf-text';
 
 const uuid = () => crypto.randomUUID();
 type Agent = Awaited<ReturnType<typeof signedIn>>;
@@ -147,6 +149,32 @@ describe('walks API', () => {
       expect(res.status).toBe(409);
       expect(res.body.error.message).toMatch(/finished/);
     }
+  });
+
+  it('makes a PDF report with the job, the steps, readings, verdicts, the cause and the cautions', async () => {
+    const id = await startWalk(ctx.tech, ctx.jobId, ctx.treeId);
+    for (const event of LEAN_PATH) await ctx.tech.post(`/api/walks/${id}/steps`).send({ stepId: uuid(), event, note: 'Checked twice' });
+    const photo = await sharp({ create: { width: 64, height: 48, channels: 3, background: '#556677' } }).jpeg().toBuffer();
+    expect((await ctx.tech.post(`/api/walks/${id}/photos`).field('step', 'visual-hoses').attach('photo', photo, 'hose.jpg')).status).toBe(201);
+    await ctx.tech.post(`/api/walks/${id}/finish`).send({ outcome: 'fixed', note: 'New clamp fitted' });
+    const res = await ctx.tech.get(`/api/walks/${id}/report.pdf`).buffer(true).parse((r, cb) => {
+      const parts: Buffer[] = [];
+      r.on('data', (c: Buffer) => parts.push(c));
+      r.on('end', () => cb(null, Buffer.concat(parts)));
+    });
+    expect(res.status).toBe(200);
+    expect(res.headers['content-type']).toBe('application/pdf');
+    expect(res.headers['content-disposition']).toMatch(/attachment; filename="baywalk-W-[\w-]+-walk-\d+\.pdf"/);
+    const pdf = res.body as Buffer;
+    expect(pdf.subarray(0, 5).toString()).toBe('%PDF-');
+    // Embedded images: the photo thumbnail is in the file.
+    expect(pdf.includes(Buffer.from('/Subtype /Image'))).toBe(true);
+    const text = pdfText(pdf);
+    for (const words of ['Rowan Pike', 'Vacuum hose off or split', 'Verdict: Lean', 'Answer: 15 inHg', 'Note: Checked twice', 'New clamp fitted', 'CAUTION: Exhaust gas', `tech `, 'Time spent']) {
+      expect(text, words).toContain(words);
+    }
+    const o = await signedIn(t.app, other.people.tech.email);
+    expect((await o.get(`/api/walks/${id}/report.pdf`)).status).toBe(404);
   });
 
   it('asks for a cause in words when finishing as fixed before reaching a cause step', async () => {
