@@ -11,6 +11,7 @@ import { mountRoutes } from './http/route-table';
 import { accessGuard } from './http/access';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { mountStaticSite } from './http/static-site';
+import { mountDevMail } from './routes/dev-mail-routes';
 import { sessionMiddleware } from './auth/session';
 import { createPassport } from './auth/passport-setup';
 import { csrfGuard } from './http/csrf';
@@ -68,6 +69,8 @@ export function createApp(deps: AppDeps) {
   api.use(apiNotFound);
   app.use('/api', api);
 
+  // The caught-mail pages exist only outside production.
+  if (!config.production) mountDevMail(app, config.mailDir);
   if (deps.serveWeb) mountStaticSite(app, config.distDir);
   app.use(errorHandler);
   return { app, services, logger };

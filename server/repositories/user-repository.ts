@@ -35,6 +35,28 @@ export function createUserRepository(knex: Knex) {
         .where('users.id', id)
         .first('users.*', 'shops.name as shop_name');
     },
+    /** Everyone of a shop, owners first, then by name. */
+    async listInShop(shopId: number): Promise<UserRow[]> {
+      return knex<UserRow>('users')
+        .where({ shop_id: shopId })
+        .orderByRaw("FIELD(role, 'owner', 'lead', 'tech', 'support')")
+        .orderBy('name');
+    },
+    /** Locks and counts a shop's active owners, inside a transaction (last-owner protection). */
+    async lockActiveOwners(shopId: number, trx: Knex): Promise<number[]> {
+      const rows = await trx('users').where({ shop_id: shopId, role: 'owner', active: true }).forUpdate().select('id');
+      return rows.map((r: { id: number }) => r.id);
+    },
+    async updateInShop(shopId: number, id: number, patch: Partial<Pick<UserRow, 'role' | 'active'>>, trx: Knex = knex): Promise<void> {
+      await trx('users').where({ shop_id: shopId, id }).update(patch);
+    },
+    async setPassword(id: number, passwordHash: string, trx: Knex = knex): Promise<void> {
+      await trx('users').where({ id }).update({ password_hash: passwordHash });
+    },
+    /** Ends every stored session of a person (after a password reset). */
+    async endSessions(id: number, trx: Knex = knex): Promise<void> {
+      await trx('sessions').whereRaw("JSON_VALUE(sess, '$.passport.user') = ?", [String(id)]).delete();
+    },
     async markSignedIn(id: number): Promise<void> {
       await knex('users').where({ id }).update({ last_sign_in_at: knex.fn.now(3) });
     },

@@ -1,13 +1,23 @@
 import type { Request, Response, NextFunction } from 'express';
 import type { PassportStatic } from 'passport';
-import { signInSchema, signUpSchema, type SignUp } from '@/shared/schemas/auth';
+import {
+  FORGOT_PASSWORD_ANSWER,
+  forgotPasswordSchema,
+  resetCheckSchema,
+  resetPasswordSchema,
+  signInSchema,
+  signUpSchema,
+  type ForgotPassword,
+  type ResetPassword,
+  type SignUp,
+} from '@/shared/schemas/auth';
 import type { RouteDef } from '../http/route-table';
 import type { SessionUser } from '../http/access';
 import type { Services } from '../services';
 import { AppError } from '../errors';
 import { endSession, startSession } from '../auth/start-session';
 
-/** Sign-up, sign-in, sign-out and "who am I". */
+/** Sign-up, sign-in, sign-out, "who am I" and password reset. */
 export const authRoutes = (s: Services, passport: PassportStatic): RouteDef[] => [
   {
     method: 'post',
@@ -26,6 +36,7 @@ export const authRoutes = (s: Services, passport: PassportStatic): RouteDef[] =>
     method: 'post',
     path: '/auth/sign-in',
     allow: 'public',
+    before: s.limiters.signIn,
     body: signInSchema,
     handler: async ({ req, res }) => {
       const user = await authenticate(passport, req, res);
@@ -46,6 +57,36 @@ export const authRoutes = (s: Services, passport: PassportStatic): RouteDef[] =>
     },
   },
   {
+    method: 'post',
+    path: '/auth/forgot-password',
+    allow: 'public',
+    before: s.limiters.passwordReset,
+    body: forgotPasswordSchema,
+    handler: async ({ req, body }) => {
+      await s.passwordResets.request((body as ForgotPassword).email, requestOrigin(req));
+      return { message: FORGOT_PASSWORD_ANSWER };
+    },
+  },
+  {
+    method: 'post',
+    path: '/auth/reset-password/check',
+    allow: 'public',
+    body: resetCheckSchema,
+    handler: ({ body }) => s.passwordResets.check((body as { token: string }).token),
+  },
+  {
+    method: 'post',
+    path: '/auth/reset-password',
+    allow: 'public',
+    body: resetPasswordSchema,
+    handler: async ({ req, body }) => {
+      const user = await s.passwordResets.complete(body as ResetPassword);
+      await startSession(req, user);
+      await s.auth.recordSignIn(user.id);
+      return { user: await s.auth.me(user.id) };
+    },
+  },
+  {
     method: 'get',
     path: '/auth/me',
     allow: 'public',
@@ -55,6 +96,11 @@ export const authRoutes = (s: Services, passport: PassportStatic): RouteDef[] =>
     },
   },
 ];
+
+/** The origin this request came to; links in mail use it unless BAYWALK_PUBLIC_URL is set. */
+export function requestOrigin(req: Request): string {
+  return `${req.protocol}://${req.get('host')}`;
+}
 
 function authenticate(passport: PassportStatic, req: Request, res: Response): Promise<SessionUser | false> {
   return new Promise((resolve, reject) => {

@@ -4,6 +4,8 @@ import type { PassportStatic } from 'passport';
 import { healthRoutes } from './health-routes';
 import { authRoutes } from './auth-routes';
 import { shopRoutes } from './shop-routes';
+import { peopleRoutes } from './people-routes';
+import { invitationRoutes } from './invitation-routes';
 import { readingsRoutes } from './readings-routes';
 import { jobRoutes } from './job-routes';
 import { walkRoutes } from './walk-routes';
@@ -12,5 +14,5 @@ import { treeRoutes } from './tree-routes';
 
 /** The whole API route table, paths relative to /api. Tests walk this list. */
 export function apiRoutes(s: Services, passport: PassportStatic): RouteDef[] {
-  return [...healthRoutes(s), ...authRoutes(s, passport), ...shopRoutes(s), ...readingsRoutes(s), ...jobRoutes(s), ...walkRoutes(s), ...photoRoutes(s), ...treeRoutes(s)];
+  return [...healthRoutes(s), ...authRoutes(s, passport), ...shopRoutes(s), ...peopleRoutes(s), ...invitationRoutes(s), ...readingsRoutes(s), ...jobRoutes(s), ...walkRoutes(s), ...photoRoutes(s), ...treeRoutes(s)];
 }

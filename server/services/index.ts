@@ -3,6 +3,7 @@ import type { Config } from '../config';
 import { createHealthService } from './health-service';
 import { createAuthService } from './auth-service';
 import { createShopService } from './shop-service';
+import { createAccountBundle } from './account-bundle';
 import { createReadingsService } from './readings-service';
 import { createJobService } from './job-service';
 import { createWalkBundle } from './walk-bundle';
@@ -14,6 +15,7 @@ export function createServices(deps: { knex: Knex; config: Config }) {
     health: createHealthService(deps.knex),
     auth: createAuthService(deps.knex),
     shop: createShopService(deps.knex),
+    ...createAccountBundle(deps.knex, deps.config),
     readings: createReadingsService(),
     jobs: createJobService(deps.knex),
     ...createWalkBundle(deps.knex, deps.config),
