@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { validateTree } from './validate';
 import { stepsInOrder } from './graph';
-import { stockLibrary } from './fixtures/walk-helpers';
+import { readingFor, stockLibrary } from './fixtures/walk-helpers';
+import { SYMPTOMS } from './tree-format';
 
 const library = stockLibrary();
 
@@ -20,6 +21,19 @@ describe.each(library)('stock tree $file', ({ file, json }) => {
     expect(stepsInOrder(doc!)).toHaveLength(stats.steps);
   });
 
+  it('can take every branch of every reading step with some reading', () => {
+    const contexts = [{}, { altitudeM: 0 }, { altitudeM: 1500 }, { altitudeM: 3000 }];
+    for (const [id, s] of Object.entries(doc!.machine.states)) {
+      if (s.meta.kind !== 'reading') continue;
+      const reading = s.meta.reading;
+      const branches = Object.values(s.on ?? {}).flat();
+      for (const b of branches) {
+        const reachable = contexts.some((ctx) => readingFor(reading, b.guard!.params.is, ctx));
+        expect(reachable, `${id}: no reading gives "${b.guard!.params.is}"`).toBe(true);
+      }
+    }
+  });
+
   it('is the size the library promises, measures something, and warns where a step can hurt', () => {
     const states = Object.values(doc!.machine.states);
     expect(stats.steps).toBeGreaterThanOrEqual(10);
@@ -31,6 +45,13 @@ describe.each(library)('stock tree $file', ({ file, json }) => {
 });
 
 describe('the stock library as a whole', () => {
+  it('has at least 7 trees, one for every named symptom', () => {
+    expect(library.length).toBeGreaterThanOrEqual(7);
+    const covered = new Set(library.map(({ json }) => (json as { symptom: string }).symptom));
+    expect(SYMPTOMS.filter((s) => s !== 'other' && !covered.has(s))).toEqual([]);
+  });
+
+
   it('gives every tree its own id', () => {
     const ids = library.map(({ json }) => (json as { id: string }).id);
     expect(new Set(ids).size).toBe(ids.length);

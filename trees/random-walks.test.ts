@@ -36,6 +36,9 @@ function eventPool(doc: TreeDoc): WalkEvent[] {
   return [...names].map((n) => (n === 'reading' ? { type: 'reading', value: 1 } : { type: n })) as WalkEvent[];
 }
 
+// What the walks did, so the harness can show it exercised refusals and readings, not just happy paths.
+const seen = { junkRefused: 0, readingRefused: 0, readingsTaken: 0, finals: 0 };
+
 const choiceArb = fc.record({ pick: fc.nat(), at: fc.double({ min: 0, max: 1, noNaN: true }), junk: fc.nat(), sendJunk: fc.boolean() });
 
 describe.each(trees)('random walks through $name', ({ doc }) => {
@@ -61,14 +64,17 @@ describe.each(trees)('random walks through $name', ({ doc }) => {
             const junk = notOffered[c.junk % notOffered.length];
             const r = applyEvent(doc, events, junk, ctx);
             expect(r.ok, `${stepId} accepted ${junk.type}`).toBe(false);
+            seen.junkRefused++;
           }
 
           const next = chooseEvent(doc, stepId, answers, c, ctx, i >= cap / 2, homeward);
           const r = applyEvent(doc, events, next.event, ctx);
           if (next.expect === 'refused') {
             expect(r.ok).toBe(false);
+            seen.readingRefused++;
             continue;
           }
+          if (next.event.type === 'reading') seen.readingsTaken++;
           expect(r.ok, JSON.stringify(r)).toBe(true);
           if (!r.ok) return;
           if (next.expect) expect(r.verdict).toBe(next.expect);
@@ -79,6 +85,7 @@ describe.each(trees)('random walks through $name', ({ doc }) => {
           expect(String(actor.getSnapshot().value)).toBe(stepId);
         }
         expect(final, `walk of ${events.length} events stopped at ${stepId}`).toBe(true);
+        seen.finals++;
         expect(actor.getSnapshot().status).toBe('done');
         const replayed = replayWalk(doc, events, ctx);
         expect(replayed.stepId).toBe(stepId);
@@ -86,7 +93,7 @@ describe.each(trees)('random walks through $name', ({ doc }) => {
         expect(replayed.path).toHaveLength(events.length + 1);
         actor.stop();
       }),
-      { numRuns: 40 },
+      { numRuns: 100 },
     );
   });
 });
@@ -125,5 +132,12 @@ describe('the random-walk harness itself', () => {
   it('walks every tree it was given, the fixture included', () => {
     expect(trees.length).toBeGreaterThanOrEqual(1 + stockLibrary().length);
     expect(trees[0].name).toBe('fixture tree');
+  });
+
+  it('exercised refusals of unoffered events and impossible readings as well as readings taken', () => {
+    expect(seen.finals).toBe(100 * trees.length);
+    expect(seen.junkRefused).toBeGreaterThan(0);
+    expect(seen.readingRefused).toBeGreaterThan(0);
+    expect(seen.readingsTaken).toBeGreaterThan(0);
   });
 });
