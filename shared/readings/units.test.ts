@@ -43,3 +43,9 @@ describe('units', () => {
     expect(formatNumber(2.5)).toBe('2.5');
   });
 });
+
+describe('units overflow', () => {
+  it('refuses a pressure whose pascal value overflows instead of returning Infinity', () => {
+    expect(() => pressureToPa(1e308, 'psi', 'vacuum')).toThrow(expect.objectContaining({ field: 'vacuum', message: expect.stringMatching(/too large/) }));
+  });
+});

@@ -48,7 +48,9 @@ export function pressureUnitFrom(unit: string | undefined, field: string, fallba
 /** Converts a pressure (absolute or a difference such as vacuum) in `unit` to pascals. */
 export function pressureToPa(value: number, unit: PressureUnit, field = 'pressure'): number {
   requireFinite(value, field, 'The pressure');
-  return value * PA_PER_PRESSURE_UNIT[unit];
+  const pa = value * PA_PER_PRESSURE_UNIT[unit];
+  if (!Number.isFinite(pa)) throw new ReadingError(field, `${value} ${unit} is too large to be a pressure.`);
+  return pa;
 }
 
 /** Converts pascals to `unit`. */
