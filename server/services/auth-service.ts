@@ -5,6 +5,7 @@ import { createUserRepository } from '../repositories/user-repository';
 import { createShopRepository } from '../repositories/shop-repository';
 import { hashPassword } from '../auth/passwords';
 import { conflict, notFound } from '../errors';
+import { installStockTrees } from './tree-stock';
 
 export const EMAIL_TAKEN = 'That address already has a Baywalk account. Sign in instead, or use another address.';
 
@@ -28,6 +29,8 @@ export function createAuthService(knex: Knex) {
         return await knex.transaction(async (trx) => {
           const shopId = await shops.create({ name: input.shopName }, trx);
           const id = await users.create({ shop_id: shopId, email: input.email, name: input.name, role: 'owner', password_hash: passwordHash }, trx);
+          // A new shop opens with the stock tree library, in the same transaction (all or nothing).
+          await installStockTrees(trx, shopId);
           return { id, shopId, role: 'owner' };
         });
       } catch (err) {

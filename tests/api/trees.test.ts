@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { createTestApp } from '../support/test-app';
-import { createShopWithPeople, signedIn, type TestShop } from '../support/people';
+import { agent, createShopWithPeople, signedIn, type TestShop } from '../support/people';
 import { installStockTrees, loadStockLibrary } from '@/server/services/tree-stock';
 import type { TreeDetail, TreeList } from '@/shared/schemas/trees';
 import { treeDetailSchema, treeListSchema } from '@/shared/schemas/trees';
@@ -138,5 +138,21 @@ describe('installing the stock library', () => {
     await t.knex('tree_versions').insert({ tree_id: tree.id, shop_id: shop.shopId, version: 3, state: 'draft', doc: JSON.stringify(changed.trees[0].doc), source: 'shop', note: 'Our edit' });
     changed.trees[0].doc.title = 'Another shipped title';
     expect((await installStockTrees(t.knex, shop.shopId, changed)).updated).toEqual([]);
+  });
+});
+
+describe('a shop opened by sign-up', () => {
+  const t = createTestApp();
+  afterAll(() => t.close());
+
+  it('starts with the whole stock library published', async () => {
+    const a = agent(t.app);
+    const email = `founder-${Date.now()}-${Math.random().toString(36).slice(2, 8)}@trees.example`;
+    const res = await a.post('/api/auth/sign-up').send({ shopName: 'Copperline Engine Works', name: 'Rene Founder', email, password: 'a long enough password' });
+    expect(res.status, JSON.stringify(res.body)).toBeLessThan(300);
+    const list = await a.get('/api/trees');
+    expect(list.status).toBe(200);
+    expect(list.body.trees.map((x: { slug: string }) => x.slug).sort()).toEqual(loadStockLibrary().trees.map((x) => x.doc.id).sort());
+    expect(list.body.trees.every((x: { publishedVersion: number }) => x.publishedVersion === 1)).toBe(true);
   });
 });
