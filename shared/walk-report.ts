@@ -2,24 +2,13 @@
  * The walk report as data: what the printable page and the PDF both show.
  * Pure, so the screen and the server tell the same story from one walk.
  */
-import type { Hazard, TreeDoc } from '@/trees/tree-format';
-import { INSTALL_TYPE_LABELS } from '@/trees/tree-format';
+import type { TreeDoc } from '@/trees/tree-format';
+import { HAZARD_LABELS, INSTALL_TYPE_LABELS } from '@/trees/tree-format';
 import { VERDICT_LABELS, VERDICT_TONES, type VerdictTone } from '@/shared/readings/verdict-labels';
 import type { Verdict } from '@/shared/readings/reading-kinds';
 import type { WalkDetail, WalkPhoto, WalkStepRecord } from './schemas/walks';
 import { WALK_OUTCOME_LABELS } from './schemas/walks';
 
-export const HAZARD_LABELS: Record<Hazard, string> = {
-  fuel_pressure: 'Fuel under pressure',
-  hot_parts: 'Hot parts',
-  moving_parts: 'Moving parts',
-  exhaust_gas: 'Exhaust gas',
-  fire: 'Fire',
-  electrical: 'Electrical',
-  vehicle_support: 'Vehicle support',
-  chemicals: 'Chemicals',
-  eye_protection: 'Eye protection',
-};
 
 export interface ReportCaution {
   title: string;

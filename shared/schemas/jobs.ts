@@ -81,7 +81,8 @@ export const jobListQuerySchema = z.object({
   page: z.coerce.number().int().min(1, 'Pages start at 1.').max(100_000).default(1),
   pageSize: z.coerce.number().int().min(1).max(100, 'Ask for at most 100 jobs a page.').default(20),
 });
-export type JobListQuery = z.input<typeof jobListQuerySchema>;
+/** What the client asks the job list for (the schema coerces query-string text). */
+export type JobListQuery = { q?: string; page?: number; pageSize?: number };
 
 /** A job as the API returns it. */
 export const jobSchema = z.object({
