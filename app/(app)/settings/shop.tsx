@@ -1,0 +1,6 @@
+import { ShopSettingsScreen } from '@/components/settings/shop-settings-form';
+
+/** /settings/shop (owner). */
+export default function ShopRoute() {
+  return <ShopSettingsScreen />;
+}
