@@ -8,6 +8,7 @@ import { createReadingsService } from './readings-service';
 import { createJobService } from './job-service';
 import { createWalkBundle } from './walk-bundle';
 import { createTreeService } from './tree-service';
+import { createPatternService } from './pattern-service';
 
 /** Everything the routes call, built once per app. Services never see req/res. */
 export function createServices(deps: { knex: Knex; config: Config }) {
@@ -20,6 +21,7 @@ export function createServices(deps: { knex: Knex; config: Config }) {
     jobs: createJobService(deps.knex),
     ...createWalkBundle(deps.knex, deps.config),
     trees: createTreeService(deps.knex),
+    patterns: createPatternService(deps.knex),
   };
 }
 
