@@ -3,7 +3,11 @@ import type { ZodType } from 'zod';
 import { badRequest } from '../errors';
 import { zodDetails } from './zod-details';
 
-/** Who may call a route: 'public' for anyone, else the roles allowed. */
+/**
+ * Who may call a route: 'public' for anyone, else the staff roles allowed,
+ * or `['guest']` (GUEST_ONLY in guest-access.ts) for a customer's browser
+ * bound to a guest link. Guest and staff roles never share a route.
+ */
 export type Access = 'public' | readonly string[];
 
 export interface HandlerContext<B = unknown, Q = unknown> {
@@ -39,6 +43,9 @@ export type AccessGuard = (allow: Access) => RequestHandler;
 export function mountRoutes(router: Router, routes: readonly RouteDef[], guard: AccessGuard) {
   for (const route of routes) {
     if (!route.allow) throw new Error(`Route ${route.method.toUpperCase()} ${route.path} declares no access rule`);
+    if (route.allow !== 'public' && route.allow.includes('guest') && route.allow.length !== 1) {
+      throw new Error(`Route ${route.method.toUpperCase()} ${route.path} mixes guest access with staff roles`);
+    }
     router[route.method](route.path, guard(route.allow), ...(route.before ?? []), async (req, res) => {
       const body = parseWith(route.body, req.body ?? {}, 'body');
       const query = parseWith(route.query, req.query, 'query');

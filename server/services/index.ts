@@ -7,19 +7,23 @@ import { createAccountBundle } from './account-bundle';
 import { createReadingsService } from './readings-service';
 import { createJobService } from './job-service';
 import { createWalkBundle } from './walk-bundle';
+import { createGuestBundle } from './guest-bundle';
 import { createTreeService } from './tree-service';
 import { createPatternService } from './pattern-service';
 
 /** Everything the routes call, built once per app. Services never see req/res. */
 export function createServices(deps: { knex: Knex; config: Config }) {
+  const accounts = createAccountBundle(deps.knex, deps.config);
+  const walkBundle = createWalkBundle(deps.knex, deps.config);
   return {
     health: createHealthService(deps.knex),
     auth: createAuthService(deps.knex),
     shop: createShopService(deps.knex),
-    ...createAccountBundle(deps.knex, deps.config),
+    ...accounts,
     readings: createReadingsService(),
     jobs: createJobService(deps.knex),
-    ...createWalkBundle(deps.knex, deps.config),
+    ...walkBundle,
+    ...createGuestBundle(deps.knex, deps.config, { ...accounts, ...walkBundle }),
     trees: createTreeService(deps.knex),
     patterns: createPatternService(deps.knex),
   };

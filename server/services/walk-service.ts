@@ -10,9 +10,9 @@ import type { PhotoService } from './photo-service';
 import { toJob } from './job-service';
 import { effectiveSteps, liveEvents, timeSpentSeconds, toStepRecord, toWalkPhoto, toWalkSummary } from './walk-records';
 
-/** Who is acting: a signed-in person of a shop. */
+/** Who is acting: a signed-in person of a shop, or (id null) a customer walking by guest link. */
 export interface Actor {
-  id: number;
+  id: number | null;
   shopId: number;
 }
 
