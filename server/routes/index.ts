@@ -13,9 +13,10 @@ import { photoRoutes } from './photo-routes';
 import { guestLinkRoutes } from './guest-link-routes';
 import { guestWalkRoutes } from './guest-walk-routes';
 import { treeRoutes } from './tree-routes';
+import { treeAuthoringRoutes } from './tree-authoring-routes';
 import { patternRoutes } from './pattern-routes';
 
 /** The whole API route table, paths relative to /api. Tests walk this list. */
 export function apiRoutes(s: Services, passport: PassportStatic): RouteDef[] {
-  return [...healthRoutes(s), ...authRoutes(s, passport), ...shopRoutes(s), ...peopleRoutes(s), ...invitationRoutes(s), ...readingsRoutes(s), ...jobRoutes(s), ...walkRoutes(s), ...photoRoutes(s), ...guestLinkRoutes(s), ...guestWalkRoutes(s), ...treeRoutes(s), ...patternRoutes(s)];
+  return [...healthRoutes(s), ...authRoutes(s, passport), ...shopRoutes(s), ...peopleRoutes(s), ...invitationRoutes(s), ...readingsRoutes(s), ...jobRoutes(s), ...walkRoutes(s), ...photoRoutes(s), ...guestLinkRoutes(s), ...guestWalkRoutes(s), ...treeRoutes(s), ...treeAuthoringRoutes(s), ...patternRoutes(s)];
 }

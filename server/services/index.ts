@@ -9,6 +9,7 @@ import { createJobService } from './job-service';
 import { createWalkBundle } from './walk-bundle';
 import { createGuestBundle } from './guest-bundle';
 import { createTreeService } from './tree-service';
+import { createTreeAuthoringBundle } from './tree-authoring-bundle';
 import { createPatternService } from './pattern-service';
 
 /** Everything the routes call, built once per app. Services never see req/res. */
@@ -25,6 +26,7 @@ export function createServices(deps: { knex: Knex; config: Config }) {
     ...walkBundle,
     ...createGuestBundle(deps.knex, deps.config, { ...accounts, ...walkBundle }),
     trees: createTreeService(deps.knex),
+    ...createTreeAuthoringBundle(deps.knex),
     patterns: createPatternService(deps.knex),
   };
 }
