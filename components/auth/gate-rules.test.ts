@@ -6,8 +6,13 @@ const tech: Me = { id: 1, name: 'T', email: 't@x.example', role: 'tech', shop: {
 
 describe('sign-in gate', () => {
   it('sends anonymous people from signed-in screens to sign-in, remembering the page', () => {
-    expect(gateRedirect({ user: null, segments: ['(app)', 'jobs', '[id]'], pathname: '/jobs/4' })).toBe('/sign-in?next=%2Fjobs%2F4');
-    expect(gateRedirect({ user: null, segments: ['(app)'], pathname: '/' })).toBe('/sign-in');
+    expect(gateRedirect({ user: null, segments: ['(app)', 'jobs', '[id]'], pathname: '/jobs/4' })).toEqual({ pathname: '/sign-in', params: { next: '/jobs/4' } });
+    expect(gateRedirect({ user: null, segments: ['(app)'], pathname: '/' })).toEqual({ pathname: '/sign-in' });
+  });
+
+  it('remembers the address first opened when the router fell back to `/` while loading', () => {
+    expect(gateRedirect({ user: null, segments: ['(app)'], pathname: '/', deepLink: '/settings/people' })).toEqual({ pathname: '/sign-in', params: { next: '/settings/people' } });
+    expect(gateRedirect({ user: null, segments: ['(app)'], pathname: '/', deepLink: 'https://evil.example' })).toEqual({ pathname: '/sign-in' });
   });
 
   it('never redirects while the session is still loading', () => {
@@ -16,9 +21,9 @@ describe('sign-in gate', () => {
   });
 
   it('sends signed-in people away from sign-in, to `next` when it is safe', () => {
-    expect(gateRedirect({ user: tech, segments: ['(auth)', 'sign-in'], pathname: '/sign-in' })).toBe('/');
-    expect(gateRedirect({ user: tech, segments: ['(auth)', 'sign-in'], pathname: '/sign-in', next: '/jobs/4' })).toBe('/jobs/4');
-    expect(gateRedirect({ user: tech, segments: ['(auth)', 'sign-up'], pathname: '/sign-up', next: '//evil.example' })).toBe('/');
+    expect(gateRedirect({ user: tech, segments: ['(auth)', 'sign-in'], pathname: '/sign-in' })).toEqual({ pathname: '/' });
+    expect(gateRedirect({ user: tech, segments: ['(auth)', 'sign-in'], pathname: '/sign-in', next: '/jobs/4' })).toEqual({ pathname: '/jobs/4' });
+    expect(gateRedirect({ user: tech, segments: ['(auth)', 'sign-up'], pathname: '/sign-up', next: '//evil.example' })).toEqual({ pathname: '/' });
   });
 
   it('lets anyone open a reset or invitation link, and public pages', () => {

@@ -21,15 +21,28 @@ export function safeNext(next: unknown): string | undefined {
  *   browser where someone else is signed in), as do public pages.
  * `user` undefined means "not known yet": never redirect on a guess.
  */
-export function gateRedirect(input: { user: Me | null | undefined; segments: readonly string[]; pathname: string; next?: unknown }): string | undefined {
+export interface GateTarget {
+  pathname: string;
+  params?: { next: string };
+}
+
+export function gateRedirect(input: {
+  user: Me | null | undefined;
+  segments: readonly string[];
+  pathname: string;
+  next?: unknown;
+  /** Where the page was first opened (see deep-link.ts), used when the router has fallen back to `/`. */
+  deepLink?: string;
+}): GateTarget | undefined {
   const { user, segments, pathname } = input;
   if (user === undefined) return undefined;
   const group = segments[0];
   if (group === '(app)' && !user) {
-    return pathname && pathname !== '/' ? `/sign-in?next=${encodeURIComponent(pathname)}` : '/sign-in';
+    const next = pathname && pathname !== '/' ? pathname : safeNext(input.deepLink);
+    return next ? { pathname: '/sign-in', params: { next } } : { pathname: '/sign-in' };
   }
   if (group === '(auth)' && user && ANONYMOUS_ONLY.has(segments[1] ?? '')) {
-    return safeNext(input.next) ?? '/';
+    return { pathname: safeNext(input.next) ?? '/' };
   }
   return undefined;
 }

@@ -4,6 +4,7 @@ import { useGlobalSearchParams, usePathname, useRouter, useSegments } from 'expo
 import { ApiError } from '@/hooks/api-client';
 import { sessionKeys, useSession } from '@/hooks/use-session';
 import { gateRedirect } from './gate-rules';
+import { peekDeepLink, takeDeepLink } from './deep-link';
 
 /**
  * The sign-in gate, mounted once by the root layout. It reads the session
@@ -20,11 +21,17 @@ export function SessionGate({ children }: { children: ReactNode }) {
   const client = useQueryClient();
 
   const user = session.isError ? undefined : session.data;
-  const target = gateRedirect({ user, segments, pathname, next });
+  const target = gateRedirect({ user, segments, pathname, next, deepLink: peekDeepLink() });
 
+  // Keyed by a string so the effect runs once per destination, not per render.
+  const targetKey = target ? JSON.stringify(target) : '';
   useEffect(() => {
-    if (target) router.replace(target as never);
-  }, [target, router]);
+    if (!targetKey) return;
+    const dest = JSON.parse(targetKey) as { pathname: string; params?: { next: string } };
+    // Sent to sign-in with the deep link as `next`: it travels in the URL from here on.
+    if (dest.params?.next) takeDeepLink();
+    router.replace(dest as never);
+  }, [targetKey, router]);
 
   useEffect(() => {
     const onError = (error: unknown) => {
