@@ -7,6 +7,8 @@ export class ApiError extends Error {
     readonly code: string,
     message: string,
     readonly fields: Record<string, string> = {},
+    /** The whole `details` of the refusal (lists such as validator findings). */
+    readonly details?: unknown,
   ) {
     super(message);
     this.name = 'ApiError';
@@ -43,7 +45,7 @@ export async function api<T>(path: string, init: RequestInit & { json?: unknown;
   const parsed = apiErrorSchema.safeParse(body);
   if (parsed.success) {
     const details = parsed.data.error.details as { fields?: Record<string, string> } | undefined;
-    throw new ApiError(res.status, parsed.data.error.code, parsed.data.error.message, details?.fields ?? {});
+    throw new ApiError(res.status, parsed.data.error.code, parsed.data.error.message, details?.fields ?? {}, parsed.data.error.details);
   }
   throw new ApiError(res.status, 'http', `The server answered ${res.status}. Try again in a moment.`);
 }
