@@ -56,7 +56,7 @@ const hitCache = new WeakMap<ReadingParams, Map<string, Array<{ value: number; u
 
 /** A reading the readings check itself judges `verdict` (so no threshold is copied here), picked at random among those that do. */
 function readingFor(params: ReadingParams, verdict: string, ctx: WalkContext, random: Random): WalkEvent | undefined {
-  const cache = hitCache.get(params) ?? new Map();
+  const cache = hitCache.get(params) ?? new Map<string, Array<{ value: number; unit?: string }>>();
   hitCache.set(params, cache);
   const key = `${verdict}|${ctx.altitudeM ?? 0}|${ctx.baroKpa ?? ''}`;
   let hits = cache.get(key);

@@ -4,6 +4,7 @@ import { createShopRepository } from '../repositories/shop-repository';
 import { createUserRepository } from '../repositories/user-repository';
 import { DEMO_PASSWORD, DEMO_PEOPLE, DEMO_SHOP } from './demo-people';
 import { installStockTreesInAllShops } from '../services/tree-stock';
+import { seedDemoShopHistory } from './demo-history';
 
 /** Loads the demo shop when the database has no shop yet, and gives every shop the stock trees it lacks. Returns whether it seeded. */
 export async function seedDemoIfEmpty(knex: Knex): Promise<boolean> {
@@ -22,6 +23,8 @@ export async function seedDemoIfEmpty(knex: Knex): Promise<boolean> {
     }
   });
   await installStockTreesInAllShops(knex);
+  // Six months of invented jobs and walks, so Patterns has something to show.
+  await seedDemoShopHistory(knex, DEMO_PEOPLE[0].email);
   return true;
 }
 
