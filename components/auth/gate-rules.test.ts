@@ -30,6 +30,9 @@ describe('sign-in gate', () => {
     expect(gateRedirect({ user: tech, segments: ['(auth)', 'accept-invite'], pathname: '/accept-invite' })).toBeUndefined();
     expect(gateRedirect({ user: null, segments: ['(auth)', 'reset-password'], pathname: '/reset-password' })).toBeUndefined();
     expect(gateRedirect({ user: null, segments: ['g', '[token]'], pathname: '/g/abc' })).toBeUndefined();
+    expect(gateRedirect({ user: tech, segments: ['g', '[token]'], pathname: '/g/abc' })).toBeUndefined();
+    // A guest link's token never travels on as a `next` address.
+    expect(safeNext('/g/abc')).toBeUndefined();
   });
 
   it('follows only same-site `next` paths', () => {

@@ -7,7 +7,8 @@ const ANONYMOUS_ONLY = new Set(['sign-in', 'sign-up', 'forgot-password']);
 export function safeNext(next: unknown): string | undefined {
   if (typeof next !== 'string' || !next.startsWith('/') || next.startsWith('//') || next.includes('\\')) return undefined;
   const first = next.split(/[/?#]/)[1] ?? '';
-  if (ANONYMOUS_ONLY.has(first) || first === 'reset-password' || first === 'accept-invite') return undefined;
+  // A guest link (/g/<token>) is never a place to send staff after signing in, nor a token to carry in a URL.
+  if (ANONYMOUS_ONLY.has(first) || first === 'reset-password' || first === 'accept-invite' || first === 'g') return undefined;
   return next;
 }
 
@@ -37,6 +38,8 @@ export function gateRedirect(input: {
   const { user, segments, pathname } = input;
   if (user === undefined) return undefined;
   const group = segments[0];
+  // Guest links (app/g/): no account, so never redirected, whoever is signed in here.
+  if (group === 'g') return undefined;
   if (group === '(app)' && !user) {
     const next = pathname && pathname !== '/' ? pathname : safeNext(input.deepLink);
     return next ? { pathname: '/sign-in', params: { next } } : { pathname: '/sign-in' };

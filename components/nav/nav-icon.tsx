@@ -21,6 +21,11 @@ export function NavIcon({ name, color, size = 24 }: { name: string; color: strin
           <Circle cx={6} cy={19.5} r={2} {...stroke} />
           <Path d="M11 6.2 7 10.3M13 6.2l4 4.1M6 14v3.5" {...stroke} />
         </>
+      ) : name === 'support' ? (
+        <>
+          <Rect x={3} y={5} width={18} height={14} rx={2} {...stroke} />
+          <Path d="m3.5 6 8.5 7 8.5-7" {...stroke} />
+        </>
       ) : name === 'readings' ? (
         <>
           <Path d="M3.5 17a8.5 8.5 0 1 1 17 0" {...stroke} />

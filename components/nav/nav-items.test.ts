@@ -5,16 +5,16 @@ import { activeItem, homeFor, navItemsFor, NAV_ITEMS } from './nav-items';
 describe('navigation entries by role', () => {
   it('shows each role only what the design allows', () => {
     const labels = (role: (typeof ROLES)[number]) => navItemsFor(role).map((i) => i.label);
-    expect(labels('owner')).toEqual(['Jobs', 'Trees', 'Readings', 'Settings']);
-    expect(labels('lead')).toEqual(['Jobs', 'Trees', 'Readings']);
+    expect(labels('owner')).toEqual(['Jobs', 'Support', 'Trees', 'Readings', 'Settings']);
+    expect(labels('lead')).toEqual(['Jobs', 'Support', 'Trees', 'Readings']);
     expect(labels('tech')).toEqual(['Jobs', 'Trees', 'Readings']);
-    expect(labels('support')).toEqual(['Trees', 'Readings']);
+    expect(labels('support')).toEqual(['Support', 'Trees', 'Readings']);
   });
 
   it('lands every role on the first entry it may use', () => {
     expect(homeFor('owner')).toBe('/jobs');
     expect(homeFor('tech')).toBe('/jobs');
-    expect(homeFor('support')).toBe('/trees');
+    expect(homeFor('support')).toBe('/support');
   });
 
   it('marks the entry a nested path belongs to', () => {

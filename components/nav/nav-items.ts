@@ -1,9 +1,9 @@
-import { ANY_STAFF, OWNERS, WORKSHOP, type Role } from '@/shared/roles';
+import { ANY_STAFF, LINK_SENDERS, OWNERS, WORKSHOP, type Role } from '@/shared/roles';
 
 export interface NavItem {
   key: string;
   label: string;
-  href: '/jobs' | '/trees' | '/readings' | '/settings';
+  href: '/jobs' | '/support' | '/trees' | '/readings' | '/settings';
   /** Icon name for NavIcon, always shown with the label. */
   icon: string;
   /** Roles that see the entry; the API enforces the same rights on its own. */
@@ -13,6 +13,8 @@ export interface NavItem {
 /** The signed-in navigation, in order. Add a screen here with the roles that may use it. */
 export const NAV_ITEMS: readonly NavItem[] = [
   { key: 'jobs', label: 'Jobs', href: '/jobs', icon: 'jobs', roles: WORKSHOP },
+  // Before Trees, so support staff land on their inbox.
+  { key: 'support', label: 'Support', href: '/support', icon: 'support', roles: LINK_SENDERS },
   { key: 'trees', label: 'Trees', href: '/trees', icon: 'trees', roles: ANY_STAFF },
   { key: 'readings', label: 'Readings', href: '/readings', icon: 'readings', roles: ANY_STAFF },
   { key: 'settings', label: 'Settings', href: '/settings', icon: 'settings', roles: OWNERS },
