@@ -47,7 +47,7 @@ export function testDbName(suffix: string): string {
   return name;
 }
 
-function runScript(args: string[], env: NodeJS.ProcessEnv, timeout = 90_000) {
+function runScript(args: string[], env: Record<string, string | undefined>, timeout = 90_000) {
   const res = spawnSync(args[0], args.slice(1), { cwd: ROOT, env: { ...process.env, ...env }, encoding: 'utf8', timeout });
   if (res.status !== 0) throw new Error(`${args.join(' ')} failed (${res.status}): ${res.stdout}${res.stderr}`);
   return `${res.stdout}${res.stderr}`;
@@ -58,7 +58,7 @@ function runScript(args: string[], env: NodeJS.ProcessEnv, timeout = 90_000) {
  * default, or a private one when env names another data dir and port), with
  * the schema applied. The shared server is never stopped here.
  */
-export function freshDatabase(name: string, env: NodeJS.ProcessEnv = {}) {
+export function freshDatabase(name: string, env: Record<string, string> = {}) {
   const dataDir = env.BAYWALK_DATA_DIR ?? process.env.BAYWALK_DATA_DIR ?? path.join(ROOT, '.data');
   runScript(['bash', 'scripts/db-up.sh'], { ...env, BAYWALK_DB_NAME: name });
   const sock = fs.readFileSync(path.join(dataDir, 'run', 'socket-path'), 'utf8').trim();
@@ -108,7 +108,7 @@ export interface ServerProcess {
 }
 
 /** Starts server/main.ts on a port with a database and waits until it answers. */
-export async function startServer(opts: { port: number; dbName: string; dbPort?: number; env?: NodeJS.ProcessEnv }): Promise<ServerProcess> {
+export async function startServer(opts: { port: number; dbName: string; dbPort?: number; env?: Record<string, string> }): Promise<ServerProcess> {
   let out = '';
   const proc = spawn(process.execPath, ['--import', 'tsx', 'server/main.ts'], {
     cwd: ROOT,
