@@ -31,9 +31,10 @@ export function JobForm({ job }: { job?: Job }) {
     }
   };
 
-  const text = (key: keyof JobFormValues, label: string, extra: Partial<Parameters<typeof TextField>[0]> = {}) => (
-    // Basis 280 px: side by side on a wide screen, stacked on a phone.
-    <View style={styles.half}>
+  // In a row, basis 280 px puts two fields side by side when wide and stacks them on a phone.
+  // Alone in the column it must not be set: a basis there is a height.
+  const text = (key: keyof JobFormValues, label: string, extra: Partial<Parameters<typeof TextField>[0]> = {}, inRow = true) => (
+    <View style={inRow ? styles.half : undefined}>
       <TextField label={label} value={v[key] as string} onChangeText={(t) => setValue(key, t as never)} error={errors[key as string]} testID={`job-${String(key)}`} {...extra} />
     </View>
   );
@@ -60,9 +61,9 @@ export function JobForm({ job }: { job?: Job }) {
         {text('make', 'Make')}
         {text('model', 'Model')}
       </View>
-      {text('engine', 'Engine', { placeholder: 'e.g. 5.3 V8, LS-swap' })}
+      {text('engine', 'Engine', { placeholder: 'e.g. 5.3 V8, LS-swap' }, false)}
       <InstallEditor value={v.install} onChange={(install) => setValue('install', install)} errors={errors} />
-      {text('notes', 'Notes', { multiline: true, numberOfLines: 4, placeholder: 'What the customer reports, what was done before' })}
+      {text('notes', 'Notes', { multiline: true, numberOfLines: 4, placeholder: 'What the customer reports, what was done before' }, false)}
       <FormActions formError={form.formError} testID="job-form">
         <Button label={job ? 'Save changes' : 'Create job'} onPress={() => void submit()} busy={saving} testID="job-save" />
         <Button label="Cancel" kind="secondary" onPress={() => (router.canGoBack() ? router.back() : router.replace(job ? `/jobs/${job.id}` : '/jobs'))} testID="job-cancel" />
