@@ -22,12 +22,12 @@ describe('server killed with SIGKILL under load', () => {
   beforeAll(() => {
     db = freshDatabase(dbName);
     knex = knexFor(dbName);
-  });
+  }, 120_000);
   afterAll(async () => {
     await server?.kill('SIGKILL');
     await knex?.destroy();
     db?.drop();
-  });
+  }, 60_000);
 
   it(`loses and doubles nothing across ${KILLS} kills`, async () => {
     const { shop, treeId } = await shopWithTrees(knex, 'Crash');
