@@ -112,7 +112,7 @@ function Finished({ walk, source }: { walk: WalkDetail; source: WalkSource }) {
       <Notice tone="ok" title={`Walk finished: ${walk.walk.outcome ? WALK_OUTCOME_LABELS[walk.walk.outcome] : ''}`}>
         {[walk.walk.causeText ? `Cause: ${walk.walk.causeText}.` : 'No cause recorded.', walk.walk.finishNote ? `Done: ${walk.walk.finishNote}` : ''].filter(Boolean).join(' ')}
       </Notice>
-      <Text style={styles.small}>A finished walk is kept as it is; start a new walk from the job to look again.</Text>
+      <Text style={styles.small}>{source.finishedNote ?? 'A finished walk is kept as it is; start a new walk from the job to look again.'}</Text>
       <View style={styles.row}>
         {source.links.report ? <Button label="Open the report" onPress={() => router.push(source.links.report as never)} testID="walk-open-report" /> : null}
         {source.links.job ? <Button label="Back to the job" kind="secondary" onPress={() => router.push(source.links.job as never)} testID="walk-to-job" /> : null}

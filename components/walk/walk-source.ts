@@ -20,6 +20,8 @@ export interface WalkSource {
   removePhoto: (photoId: string) => Promise<unknown>;
   /** Where the printable report and the PDF are, and where "back to the job" goes; null when not offered. */
   links: { report: string | null; pdf: string | null; job: string | null };
+  /** Words under a finished walk's outcome; the staff wording when absent (guests have no job to start another walk from). */
+  finishedNote?: string;
 }
 
 /** A fresh step id (UUID v4); kept for retries so a step is never recorded twice. */
