@@ -112,5 +112,6 @@ export function useGuestWalkSource(linkId: number): WalkSource {
     },
     // Guests have no report pages and no job.
     links: { report: null, pdf: null, job: null },
+    finishedNote: 'Your check is finished and saved with the shop; it can no longer change. If something else comes up, contact the shop.',
   };
 }

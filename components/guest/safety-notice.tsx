@@ -1,12 +1,11 @@
 import { useState } from 'react';
-import { StyleSheet, Text, View } from 'react-native';
+import { Pressable, StyleSheet, Text, View } from 'react-native';
 import type { GuestWalkState } from '@/shared/schemas/guest-links';
 import { Screen } from '@/components/screen';
 import { ThemedText } from '@/components/themed-text';
 import { Button } from '@/components/button';
 import { Notice } from '@/components/notice';
-import { CheckboxRow } from '@/components/jobs/checkbox-row';
-import { colors, fonts, radius, space, type } from '@/components/theme';
+import { colors, fonts, radius, space, touchTarget, type } from '@/components/theme';
 import { ShopContactButtons } from './shop-contact';
 
 const POINTS = [
@@ -48,7 +47,19 @@ export function SafetyNotice({ state, onAccept, busy, error }: { state: GuestWal
         ))}
       </View>
       <ShopContactButtons shop={state.shop} />
-      <CheckboxRow label="I have read this, and I will stop and call where a step tells me to." checked={read} onChange={setRead} testID="guest-safety-ack" />
+      <Pressable
+        role="checkbox"
+        aria-checked={read}
+        aria-label="I have read this, and I will stop and call where a step tells me to."
+        onPress={() => setRead((r) => !r)}
+        testID="guest-safety-ack"
+        style={[styles.ack, read && styles.ackOn]}
+      >
+        <Text style={[styles.tick, read && styles.tickOn]} aria-hidden>
+          {read ? '✓' : ' '}
+        </Text>
+        <Text style={styles.ackText}>I have read this, and I will stop and call where a step tells me to.</Text>
+      </Pressable>
       {error ? (
         <Notice tone="error" title="Not started" testID="guest-safety-error">
           {error}
@@ -68,4 +79,9 @@ const styles = StyleSheet.create({
   point: { gap: 2 },
   pointTitle: { fontFamily: fonts.bold, fontSize: 17, color: colors.ink },
   pointText: { ...type.body, color: colors.ink },
+  ack: { minHeight: touchTarget, flexDirection: 'row', alignItems: 'center', gap: space.md, padding: space.md, borderRadius: radius.md, borderWidth: 2, borderColor: colors.line, backgroundColor: colors.surface },
+  ackOn: { borderColor: colors.accent, backgroundColor: colors.accentSoft },
+  tick: { width: 28, height: 28, lineHeight: 24, textAlign: 'center', borderWidth: 2, borderColor: colors.inkMuted, borderRadius: radius.sm, fontFamily: fonts.bold, fontSize: 18, color: colors.onAccent },
+  tickOn: { backgroundColor: colors.accent, borderColor: colors.accent },
+  ackText: { ...type.body, flex: 1, color: colors.ink },
 });

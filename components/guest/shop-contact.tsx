@@ -9,12 +9,12 @@ export function ShopContactButtons({ shop }: { shop: ShopContact }) {
     <View style={styles.row} testID="shop-contact">
       {shop.phone ? (
         <Pressable accessibilityRole="link" accessibilityLabel={`Call ${shop.name} on ${shop.phone}`} onPress={() => void Linking.openURL(`tel:${shop.phone!.replace(/[^\d+]/g, '')}`)} style={styles.button} testID="shop-call">
-          <Text style={styles.text}>📞 Call {shop.phone}</Text>
+          <Text style={styles.text}>Call {shop.phone}</Text>
         </Pressable>
       ) : null}
       {shop.email ? (
         <Pressable accessibilityRole="link" accessibilityLabel={`Write to ${shop.email}`} onPress={() => void Linking.openURL(`mailto:${shop.email}`)} style={styles.button} testID="shop-email">
-          <Text style={styles.text}>✉ {shop.email}</Text>
+          <Text style={styles.text}>Write to {shop.email}</Text>
         </Pressable>
       ) : null}
     </View>

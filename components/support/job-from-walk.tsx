@@ -1,5 +1,4 @@
 import { StyleSheet, View } from 'react-native';
-import { router } from 'expo-router';
 import { jobInputSchema } from '@/shared/schemas/jobs';
 import type { GuestLink } from '@/shared/schemas/guest-links';
 import { useGuestLinkToJob } from '@/hooks/use-guest-links';
@@ -12,7 +11,7 @@ import { VinField } from '@/components/jobs/vin-field';
 import { jobFormValues, toJobInput } from '@/components/jobs/job-form-values';
 import { colors, radius, space } from '@/components/theme';
 
-/** The customer brought the car in: a new job with the guest walk attached, then the job's page. */
+/** The customer brought the car in: a new job with the guest walk attached. The link page then shows the job (support has no job pages). */
 export function JobFromWalk({ link, onCancel }: { link: GuestLink; onCancel: () => void }) {
   const toJob = useGuestLinkToJob(link.id);
   const form = useZodForm(jobInputSchema, { ...jobFormValues(), customerName: link.customerName, notes: link.note ?? '' }, toJobInput);
@@ -21,8 +20,7 @@ export function JobFromWalk({ link, onCancel }: { link: GuestLink; onCancel: () 
   const submit = async () => {
     if (!form.validate()) return;
     try {
-      const answer = await toJob.mutateAsync(toJobInput(v));
-      router.push(`/jobs/${answer.job.id}`);
+      await toJob.mutateAsync(toJobInput(v));
     } catch (err) {
       form.showError(err);
     }

@@ -31,7 +31,9 @@ export function LinkPage({ id }: { id: number }) {
 
   return (
     <Screen testID="guest-link-page">
-      <Button label="‹ Support" kind="secondary" onPress={() => router.push('/support')} />
+      <View style={styles.back}>
+        <Button label="‹ Support" kind="secondary" onPress={() => router.push('/support')} testID="link-back" />
+      </View>
       <View style={styles.title}>
         <ThemedText variant="title" accessibilityRole="header">
           {link.customerName}
@@ -90,6 +92,7 @@ function Facts({ link }: { link: GuestLink }) {
 }
 
 const styles = StyleSheet.create({
+  back: { flexDirection: 'row' },
   title: { gap: space.xs },
   columns: { gap: space.lg },
   columnsWide: { flexDirection: 'row', alignItems: 'flex-start' },

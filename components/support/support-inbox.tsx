@@ -29,7 +29,7 @@ export function SupportInbox() {
       </ThemedText>
       <ThemedText muted>Send a customer a guided check by link, and review the walks they send back.</ThemedText>
       <View style={styles.actions}>
-        <Button label="＋ Send a guest link" onPress={() => router.push('/support/new')} testID="support-new-link" />
+        <Button label="+ Send a guest link" onPress={() => router.push('/support/new')} testID="support-new-link" />
       </View>
       <SegmentedChoice label="Show" options={FILTERS} value={filter} onChange={setFilter} testID="support-filter" />
       {links.isPending ? <ActivityIndicator color={colors.accent} /> : null}
