@@ -13,6 +13,7 @@ import { InstallTypeChips } from './install-type-chips';
 import { TreeCard } from './tree-card';
 import { groupBySymptom } from './group-trees';
 import { useDebouncedValue } from './use-debounced-value';
+import { LibraryAuthoring } from '@/components/authoring/library-authoring';
 
 /** The Trees screen: the shop's library by symptom, with a text search and install-type chips. */
 export function TreeLibrary() {
@@ -27,6 +28,7 @@ export function TreeLibrary() {
         Trees
       </ThemedText>
       <ThemedText muted>Step-by-step fault finding, grouped by the symptom the car came back with.</ThemedText>
+      <LibraryAuthoring />
       <TextField
         label="Search trees"
         placeholder="Words from a title or summary, e.g. idle"

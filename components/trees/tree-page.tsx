@@ -10,6 +10,8 @@ import { Button } from '@/components/button';
 import { colors, fonts, space, touchTarget, type, wideBreakpoint } from '@/components/theme';
 import { StepList } from './step-list';
 import { CauseList } from './cause-list';
+import { TreeAuthoringBar } from '@/components/authoring/tree-authoring-bar';
+import { TreeStatsPanel } from '@/components/authoring/tree-stats-panel';
 
 /** One tree: what it is for, its published version, its steps in walk order and the causes it can reach. */
 export function TreePage({ id }: { id: number }) {
@@ -60,6 +62,7 @@ function TreeBody({ detail }: { detail: TreeDetail }) {
           </Text>
         ) : null}
       </View>
+      <TreeAuthoringBar detail={detail} />
       {!version || !stats ? (
         <Notice tone="info" title="Not published yet">
           This tree has no published version, so it cannot be walked yet.
@@ -83,6 +86,7 @@ function TreeBody({ detail }: { detail: TreeDetail }) {
               <CauseList causes={detail.causes} refers={detail.refers} />
             </View>
           </View>
+          <TreeStatsPanel treeId={tree.id} />
         </>
       )}
     </>
