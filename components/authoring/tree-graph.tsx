@@ -68,7 +68,9 @@ export function TreeGraph({ doc, selected, findings, onSelect }: { doc: TreeDoc;
   const missing = missingBoxes(l);
   return (
     <View style={styles.wrap} testID="tree-graph">
-      <Text style={styles.legend}>Shapes: ⬡ Ask · ▭ rounded Reading · ▮ Action · ◫ Cause · ⏵ Refer. Tap a step to open it.</Text>
+      <Text style={styles.legend}>
+        Each kind has its own outline and its name on top: Ask is six-sided, Reading has round ends, Action has a heavy left edge, Cause a double edge, Refer points away. Tap a step to open it.
+      </Text>
       <ScrollView horizontal contentContainerStyle={{ width: Math.max(l.width, 1) }}>
         <View style={{ width: l.width, height: l.height }}>
           <Svg width={l.width} height={l.height} accessibilityElementsHidden importantForAccessibility="no-hide-descendants">

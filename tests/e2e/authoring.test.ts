@@ -72,13 +72,16 @@ describe('Tree authoring in Chromium', () => {
       await page.getByTestId('new-answer-add').click();
       await page.getByTestId(`answer-${ANSWER_EVENT}-target`).click();
       await page.getByTestId(`answer-${ANSWER_EVENT}-target-new-cause`).click();
-      await waitForText(page, 'draft-checks-title', /problems? to fix before publishing/);
-      expect(await text(page, 'draft-findings')).toContain('Step "new-cause"');
+      await waitForText(page, 'draft-findings', /Step "new-cause"/);
+      expect(await text(page, 'draft-checks-title')).toMatch(/problems? to fix before publishing/);
+      // Beside the step: in the list on a wide screen, and at the top of its form once opened.
+      if (viewport === DESKTOP) expect(await text(page, 'step-marks-new-cause')).toMatch(/✖ \d+ problems?/);
       await screenshot(page, `authoring-finding-${name}`);
 
       // Complete the new step: the finding disappears.
       await page.getByTestId(`answer-${ANSWER_EVENT}-target-open`).click();
       await waitForText(page, 'step-form', /Cause step/);
+      await waitForText(page, 'step-findings', /Problem: Step "new-cause"/);
       await page.getByTestId('step-title').fill(CAUSE_TITLE);
       await page.getByTestId('cause-code').fill('cracked-vacuum-hose');
       await page.getByTestId('cause-area').fill('Vacuum hose at the intake');
@@ -130,6 +133,26 @@ describe('Tree authoring in Chromium', () => {
       expect(walk.version).toBe(2);
       expect(techErrors).toEqual([]);
       await tech.close();
+
+      // Back with the lead: the history shows both versions and what changed; the tree page counts the finished walk.
+      expect((await api.post(`/api/walks/${walkId}/finish`).send({ outcome: 'fixed' })).status).toBe(200);
+      const lead = await browser.newPage({ viewport });
+      await signIn(lead, shop.people.lead.email);
+      await lead.goto(`${server.url}/trees/${tree.id}/history`);
+      await lead.getByTestId('diff-view').waitFor(WAIT);
+      expect(await text(lead, 'history-version-2')).toContain('Added a cracked-hose answer and cause');
+      expect(await text(lead, 'history-version-2')).toContain(`by ${shop.people.lead.name}`);
+      expect(await text(lead, 'diff-step-new-cause')).toContain('Added');
+      expect(await text(lead, `diff-step-${FIRST}`)).toContain('+ **Listen with the engine warm** before anything else.');
+      expect(await text(lead, `diff-step-${FIRST}`)).toContain(`+ ${ANSWER} → new-cause`);
+      await screenshot(lead, `authoring-history-${name}`);
+      await lead.goto(`${server.url}/trees/${tree.id}`);
+      await lead.getByTestId('stats-cause-new-cause').waitFor(WAIT);
+      expect(await text(lead, 'stats-cause-new-cause')).toContain('1 walk');
+      expect(await text(lead, `stats-step-${FIRST}`)).toContain(`${ANSWER}: 1 (100 %)`);
+      await lead.getByTestId('tree-stats').scrollIntoViewIfNeeded();
+      await screenshot(lead, `authoring-stats-${name}`);
+      await lead.close();
     });
   }
 });
