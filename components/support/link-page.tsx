@@ -28,6 +28,7 @@ export function LinkPage({ id }: { id: number }) {
   if (q.error) return <Screen><Notice tone="error">{q.error.message}</Notice></Screen>;
   const { link, walk } = q.data;
   const canOpenJob = !!me && WORKSHOP.includes(me.role);
+  const wide = width >= wideBreakpoint;
 
   return (
     <Screen testID="guest-link-page">
@@ -40,9 +41,9 @@ export function LinkPage({ id }: { id: number }) {
         </ThemedText>
         <LinkStatusBadge status={link.status} testID="link-status" />
       </View>
-      <View style={[styles.columns, width >= wideBreakpoint && styles.columnsWide]}>
-        <Facts link={link} />
-        <View style={styles.side}>
+      <View style={[styles.columns, wide && styles.columnsWide]}>
+        <Facts link={link} wide={wide} />
+        <View style={[styles.side, wide && styles.half]}>
           <LinkActions link={link} />
           {link.jobId ? (
             <Notice tone="ok" title="Part of a job" testID="link-job">
@@ -60,7 +61,7 @@ export function LinkPage({ id }: { id: number }) {
   );
 }
 
-function Facts({ link }: { link: GuestLink }) {
+function Facts({ link, wide }: { link: GuestLink; wide: boolean }) {
   const rows: Array<[string, string]> = [
     ['Tree', `${link.tree.title} (version ${link.tree.version})`],
     ['E-mail', link.customerEmail ?? 'None: the link was copied'],
@@ -74,7 +75,7 @@ function Facts({ link }: { link: GuestLink }) {
   ];
   if (link.revokedAt) rows.push(['Revoked', when(link.revokedAt)]);
   return (
-    <View style={styles.facts} testID="link-facts">
+    <View style={[styles.facts, wide && styles.half]} testID="link-facts">
       {rows.map(([k, v]) => (
         <View key={k} style={styles.fact}>
           <Text style={styles.k}>{k}</Text>
@@ -96,8 +97,10 @@ const styles = StyleSheet.create({
   title: { gap: space.xs },
   columns: { gap: space.lg },
   columnsWide: { flexDirection: 'row', alignItems: 'flex-start' },
-  side: { flex: 1, gap: space.md },
-  facts: { flex: 1, gap: space.sm, backgroundColor: colors.surface, borderWidth: 1, borderColor: colors.line, borderRadius: radius.lg, padding: space.lg },
+  // Side by side only on a wide screen: flex 1 in a phone's column would squash the boxes.
+  half: { flex: 1 },
+  side: { gap: space.md },
+  facts: { gap: space.sm, backgroundColor: colors.surface, borderWidth: 1, borderColor: colors.line, borderRadius: radius.lg, padding: space.lg },
   fact: { gap: 2 },
   k: { fontFamily: fonts.semibold, fontSize: 14, color: colors.inkMuted },
   v: { ...type.body, color: colors.ink },

@@ -166,6 +166,10 @@ describe('guest link, end to end through the SMTP catcher and Chromium', () => {
     await staffPage.goto(`${url}/support`);
     await staffPage.getByTestId('support-links').getByText('Jordan Vale').waitFor(WAIT);
     await screenshot(staffPage, 'guest-link-inbox-phone');
+    await staffPage.getByTestId('support-links').getByText('Jordan Vale').click();
+    await staffPage.getByTestId('link-job').waitFor(WAIT);
+    await screenshot(staffPage, 'guest-link-page-phone');
+    expect(await staffPage.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(PHONE.width);
 
     const job = await t.knex('jobs').where({ shop_id: shop.shopId, ro_number: ro }).first('id', 'customer_name');
     expect(job.customer_name).toBe('Jordan Vale');
