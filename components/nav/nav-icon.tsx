@@ -26,6 +26,14 @@ export function NavIcon({ name, color, size = 24 }: { name: string; color: strin
           <Rect x={3} y={5} width={18} height={14} rx={2} {...stroke} />
           <Path d="m3.5 6 8.5 7 8.5-7" {...stroke} />
         </>
+      ) : name === 'patterns' ? (
+        <>
+          <Line x1={4} y1={20} x2={20} y2={20} {...stroke} />
+          <Rect x={5.5} y={12} width={3} height={8} {...stroke} />
+          <Rect x={10.5} y={7} width={3} height={13} {...stroke} />
+          <Rect x={15.5} y={10} width={3} height={10} {...stroke} />
+          <Path d="M5 8.5 11 4l4.5 3L20 4" {...stroke} />
+        </>
       ) : name === 'readings' ? (
         <>
           <Path d="M3.5 17a8.5 8.5 0 1 1 17 0" {...stroke} />

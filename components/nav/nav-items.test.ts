@@ -5,8 +5,8 @@ import { activeItem, homeFor, navItemsFor, NAV_ITEMS } from './nav-items';
 describe('navigation entries by role', () => {
   it('shows each role only what the design allows', () => {
     const labels = (role: (typeof ROLES)[number]) => navItemsFor(role).map((i) => i.label);
-    expect(labels('owner')).toEqual(['Jobs', 'Support', 'Trees', 'Readings', 'Settings']);
-    expect(labels('lead')).toEqual(['Jobs', 'Support', 'Trees', 'Readings']);
+    expect(labels('owner')).toEqual(['Jobs', 'Support', 'Trees', 'Readings', 'Patterns', 'Settings']);
+    expect(labels('lead')).toEqual(['Jobs', 'Support', 'Trees', 'Readings', 'Patterns']);
     expect(labels('tech')).toEqual(['Jobs', 'Trees', 'Readings']);
     expect(labels('support')).toEqual(['Support', 'Trees', 'Readings']);
   });

@@ -1,9 +1,9 @@
-import { ANY_STAFF, LINK_SENDERS, OWNERS, WORKSHOP, type Role } from '@/shared/roles';
+import { ANY_STAFF, AUTHORS, LINK_SENDERS, OWNERS, WORKSHOP, type Role } from '@/shared/roles';
 
 export interface NavItem {
   key: string;
   label: string;
-  href: '/jobs' | '/support' | '/trees' | '/readings' | '/settings';
+  href: '/jobs' | '/support' | '/trees' | '/readings' | '/patterns' | '/settings';
   /** Icon name for NavIcon, always shown with the label. */
   icon: string;
   /** Roles that see the entry; the API enforces the same rights on its own. */
@@ -17,6 +17,7 @@ export const NAV_ITEMS: readonly NavItem[] = [
   { key: 'support', label: 'Support', href: '/support', icon: 'support', roles: LINK_SENDERS },
   { key: 'trees', label: 'Trees', href: '/trees', icon: 'trees', roles: ANY_STAFF },
   { key: 'readings', label: 'Readings', href: '/readings', icon: 'readings', roles: ANY_STAFF },
+  { key: 'patterns', label: 'Patterns', href: '/patterns', icon: 'patterns', roles: AUTHORS },
   { key: 'settings', label: 'Settings', href: '/settings', icon: 'settings', roles: OWNERS },
 ];
 
