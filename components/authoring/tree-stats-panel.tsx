@@ -42,6 +42,9 @@ export function TreeStatsPanel({ treeId }: { treeId: number }) {
 
 function StatsBody({ s }: { s: TreeStatsAnswer }) {
   const w = s.walks;
+  // Steps nobody answered would be rows of zeros: count them instead of listing them.
+  const reached = s.steps.filter((x) => x.total > 0);
+  const unreached = s.steps.length - reached.length;
   return (
     <>
       <Text style={styles.muted}>From {w.finished} finished {w.finished === 1 ? 'walk' : 'walks'} of this shop, every version.</Text>
@@ -68,7 +71,8 @@ function StatsBody({ s }: { s: TreeStatsAnswer }) {
       ) : null}
       <View style={styles.col} testID="tree-stats-steps">
         <Text style={styles.sub}>Answers taken at each step</Text>
-        {s.steps.map((step) => (
+        {unreached ? <Text style={styles.muted}>{unreached === 1 ? '1 step was' : `${unreached} steps were`} not answered in any finished walk.</Text> : null}
+        {reached.map((step) => (
           <View key={step.stepId} style={styles.card} testID={`stats-step-${step.stepId}`}>
             <View style={styles.row}>
               {(STEP_KINDS as readonly string[]).includes(step.kind) ? <StepKindBadge kind={step.kind as StepKind} /> : null}

@@ -41,6 +41,51 @@ describe('Tree authoring in Chromium', () => {
       WAIT,
     );
 
+  it('refuses a later save with a clear message, asks before leaving with unsaved changes, and reloads the saved draft (1280x800)', async () => {
+    const shop = await createShopWithPeople(server.knex, 'Authoring conflict');
+    await installStockTrees(server.knex, shop.shopId);
+    const tree = await server.knex('trees').where({ shop_id: shop.shopId, slug: TREE }).first('id');
+    const owner = await signedIn(server.app, shop.people.owner.email);
+    expect((await owner.post(`/api/trees/${tree.id}/draft`)).status).toBe(201);
+
+    const page = await browser.newPage({ viewport: DESKTOP });
+    const errors = watchConsole(page);
+    await signIn(page, shop.people.lead.email);
+    await page.goto(`${server.url}/trees/${tree.id}/edit`);
+    await page.getByTestId('step-form').waitFor(WAIT);
+
+    // The owner saves the same draft after the lead opened it.
+    const draft = (await owner.get(`/api/trees/${tree.id}/draft`)).body;
+    const theirs = { ...draft.doc, title: 'Hiss at idle (owner edit)' };
+    expect((await owner.put(`/api/trees/${tree.id}/draft`).send({ revision: draft.revision, doc: theirs })).status).toBe(200);
+
+    // The lead's change is refused, not saved over the owner's, and the lead is told why.
+    await page.getByTestId('step-title').fill('Where is the hiss loudest?');
+    await page.getByTestId('save-conflict').waitFor(WAIT);
+    expect(await text(page, 'save-conflict')).toContain(`${shop.people.owner.name} saved this tree after you opened it`);
+    expect(await text(page, 'save-status')).toContain('someone else saved first');
+    await screenshot(page, 'authoring-conflict-desktop');
+
+    // Leaving now would lose the change: the app asks first, and staying keeps the editor.
+    const asked: string[] = [];
+    page.once('dialog', (d) => {
+      asked.push(d.message());
+      void d.dismiss();
+    });
+    await page.getByTestId('nav-jobs').click();
+    await page.waitForFunction(() => document.querySelector('[data-testid="save-conflict"]') !== null, undefined, WAIT);
+    expect(asked).toEqual([expect.stringContaining('were not saved')]);
+    expect(new URL(page.url()).pathname).toBe(`/trees/${tree.id}/edit`);
+
+    // Loading the saved draft shows the owner's version.
+    await page.getByTestId('conflict-reload').click();
+    await waitForText(page, 'tree-editor', /Hiss at idle \(owner edit\)/);
+    await waitForText(page, 'save-status', /All changes saved/);
+    expect((await owner.get(`/api/trees/${tree.id}/draft`)).body.doc.title).toBe('Hiss at idle (owner edit)');
+    expect(errors.filter((e) => !/409/.test(e))).toEqual([]);
+    await page.close();
+  });
+
   for (const [name, viewport] of [['phone', PHONE], ['desktop', DESKTOP]] as const) {
     it(`a lead edits a step, adds an answer to a new cause step, clears the finding, publishes; a tech walks the new version (${viewport.width}x${viewport.height})`, async () => {
       const shop = await createShopWithPeople(server.knex, `Authoring UI ${name}`);
