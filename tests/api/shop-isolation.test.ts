@@ -66,7 +66,22 @@ const RESOURCES: Resource[] = [
   {
     name: 'trees',
     create: async (h) => (await t.knex('trees').where({ shop_id: h.shop.shopId }).first('id')).id,
-    calls: [['get', '/trees/:id']],
+    calls: [
+      ['get', '/trees/:id'],
+      // Authoring (tests/api/tree-authoring.test.ts): drafts, publish, retire, history, files, statistics.
+      ['get', '/trees/:id/draft'],
+      ['post', '/trees/:id/draft'],
+      ['put', '/trees/:id/draft', { revision: 1, doc: { id: 'not-mine' } }],
+      ['delete', '/trees/:id/draft'],
+      ['post', '/trees/:id/publish', { revision: 1, note: 'Not mine to publish' }],
+      ['post', '/trees/:id/retire'],
+      ['post', '/trees/:id/restore'],
+      ['get', '/trees/:id/history'],
+      ['get', '/trees/:id/versions/1'],
+      ['get', '/trees/:id/diff?from=1&to=2'],
+      ['get', '/trees/:id/stats'],
+      ['get', '/trees/:id/export'],
+    ],
     list: ['/trees', (b) => b.trees.map((x: { id: number }) => x.id)],
     readBack: '/trees/:id',
   },
