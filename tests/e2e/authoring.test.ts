@@ -86,6 +86,38 @@ describe('Tree authoring in Chromium', () => {
     await page.close();
   });
 
+  it('refuses a malformed tree file naming the step, and creates a new tree straight into its draft (390x844)', async () => {
+    const shop = await createShopWithPeople(server.knex, 'Authoring new');
+    const page = await browser.newPage({ viewport: PHONE });
+    const errors = watchConsole(page);
+    await signIn(page, shop.people.lead.email);
+    await page.goto(`${server.url}/trees`);
+    await page.getByTestId('new-tree').click();
+    await page.getByTestId('tree-create').waitFor(WAIT);
+
+    // A file whose step has an unknown kind: nothing is imported and the step is named.
+    const bad = { format: 'baywalk-tree/1', id: 'pasted-tree', title: 'Pasted', symptom: 'other', installTypes: ['other'], machine: { id: 'pasted-tree', initial: 'only', states: { only: { meta: { kind: 'question', title: 'Huh' } } } } };
+    await page.getByTestId('import-text').fill(JSON.stringify(bad));
+    await page.getByTestId('import-submit').click();
+    await page.getByTestId('import-error').waitFor(WAIT);
+    expect(await text(page, 'import-error')).toContain('Nothing was imported');
+    expect(await text(page, 'import-findings')).toContain('Step "only"');
+    await screenshot(page, 'authoring-import-refused-phone');
+
+    // The form checks its fields with the shared schema before sending.
+    await page.getByTestId('new-tree-submit').click();
+    await page.getByTestId('new-tree-title-error').waitFor(WAIT);
+    await page.getByTestId('new-tree-title').fill('Stumble on tip-in after a cam swap');
+    await page.getByTestId('new-tree-symptom-rough_idle_or_misfire').click();
+    await page.getByTestId('new-tree-install-camshaft').click();
+    await page.getByTestId('new-tree-submit').click();
+    await page.waitForURL(/\/trees\/\d+\/edit$/, WAIT);
+    await waitForText(page, 'draft-findings', /Step "first-check": it has no answers/);
+    expect(await text(page, 'tree-editor')).toContain('not published yet');
+    expect(errors.filter((e) => !/400/.test(e))).toEqual([]);
+    await page.close();
+  });
+
   for (const [name, viewport] of [['phone', PHONE], ['desktop', DESKTOP]] as const) {
     it(`a lead edits a step, adds an answer to a new cause step, clears the finding, publishes; a tech walks the new version (${viewport.width}x${viewport.height})`, async () => {
       const shop = await createShopWithPeople(server.knex, `Authoring UI ${name}`);
@@ -136,6 +168,14 @@ describe('Tree authoring in Chromium', () => {
       expect(await page.getByTestId('step-findings').count()).toBe(0);
 
       if (viewport === DESKTOP) {
+        // Deleting a step warns with the steps that point at it.
+        await page.getByTestId('edit-step-new-cause').click();
+        await page.getByTestId('step-delete').click();
+        await page.getByTestId('delete-referrer-where-loudest').waitFor(WAIT);
+        expect(await text(page, 'delete-confirm')).toContain(`“${ANSWER}”`);
+        await page.getByTestId('delete-confirm-no').click();
+        expect(await page.getByTestId('edit-step-new-cause').count()).toBe(1);
+
         // The graph: every step drawn, kinds by shape and word; choosing a step opens it in the form.
         await page.getByTestId('editor-view-graph').click();
         await page.getByTestId('tree-graph').waitFor(WAIT);
@@ -163,6 +203,11 @@ describe('Tree authoring in Chromium', () => {
       const tech = await browser.newPage({ viewport });
       const techErrors = watchConsole(tech);
       await signIn(tech, shop.people.tech.email);
+      // A technician reads the tree and its history but gets no writing tools.
+      await tech.goto(`${server.url}/trees/${tree.id}`);
+      await tech.getByTestId('tree-history-link').waitFor(WAIT);
+      expect(await tech.getByTestId('start-draft').count()).toBe(0);
+      expect(await tech.getByTestId('retire-tree').count()).toBe(0);
       await tech.goto(`${server.url}/jobs/${job.body.job.id}`);
       const pick = tech.getByTestId(`start-walk-${TREE}`).first();
       await pick.waitFor(WAIT);
