@@ -40,7 +40,6 @@ export const causeColumns: TableColumn<CauseRow>[] = [
   { id: 'cause', header: 'Cause', value: (r) => r.title, primary: true },
   { id: 'walks', header: 'Walks', value: (r) => r.walks, numeric: true, render: (r) => num(r.walks) },
   { id: 'share', header: 'Share of finished', value: (r) => r.share, numeric: true, render: (r) => <Text style={styles.num}>{percent(r.share)}</Text> },
-  { id: 'jobs', header: 'Jobs', value: (r) => r.jobs, numeric: true, render: (r) => num(r.jobs) },
 ];
 
 export const repeatColumns: TableColumn<RepeatRow>[] = [

@@ -25,10 +25,9 @@ export interface PatternScope {
 
 const WEEK_S = 7 * 86_400;
 
-/** Finished walks of jobs in the scope, as `w` (with `j` joined only when a vehicle filter needs it). */
-export function scopedWalks(knex: Knex, s: PatternScope, alias = 'w'): Knex.QueryBuilder {
-  const q = knex(`walks as ${alias}`)
-    .where(`${alias}.shop_id`, s.shopId)
+/** Limits a query that reads `walks as <alias>` to the scope: the shop, finished, in the range, on a job, and the filters. */
+function applyScope(knex: Knex, q: Knex.QueryBuilder, s: PatternScope, alias: string): Knex.QueryBuilder {
+  q.where(`${alias}.shop_id`, s.shopId)
     .where(`${alias}.status`, 'finished')
     .where(`${alias}.finished_at`, '>=', s.start)
     .where(`${alias}.finished_at`, '<', s.end)
@@ -54,6 +53,9 @@ export function scopedWalks(knex: Knex, s: PatternScope, alias = 'w'): Knex.Quer
   return q;
 }
 
+/** Finished walks of jobs in the scope, as `w` (with the job joined only when a vehicle filter needs it). */
+export const scopedWalks = (knex: Knex, s: PatternScope, alias = 'w'): Knex.QueryBuilder => applyScope(knex, knex(`walks as ${alias}`), s, alias);
+
 /** Totals: finished walks, those ending at a cause, and each outcome. */
 export const totalsQuery = (knex: Knex, s: PatternScope) =>
   scopedWalks(knex, s).first(
@@ -64,12 +66,12 @@ export const totalsQuery = (knex: Knex, s: PatternScope) =>
     knex.raw("COALESCE(SUM(w.outcome = 'referred'), 0) AS referred"),
   );
 
-/** Causes found: walks and distinct jobs per cause code, most frequent first. */
+/** Causes found: walks per cause code, most frequent first. */
 export const causesQuery = (knex: Knex, s: PatternScope) =>
   scopedWalks(knex, s)
     .whereNotNull('w.cause_code')
     .groupBy('w.cause_code')
-    .select('w.cause_code', knex.raw('COUNT(*) AS walks'), knex.raw('COUNT(DISTINCT w.job_id) AS jobs'))
+    .select('w.cause_code', knex.raw('COUNT(*) AS walks'))
     .orderBy([{ column: 'walks', order: 'desc' }, { column: 'w.cause_code' }]);
 
 /**
@@ -77,8 +79,9 @@ export const causesQuery = (knex: Knex, s: PatternScope) =>
  * the same install type. A job with several install types counts under each.
  */
 export const repeatsQuery = (knex: Knex, s: PatternScope) => {
+  // The (job_id, install_type, shop_id) index answers the join alone; left to itself the optimizer picks (job_id, position) and reads every row.
   const q = scopedWalks(knex, s)
-    .join('job_changes as jc', 'jc.job_id', 'w.job_id')
+    .join(knex.raw('?? USE INDEX (job_changes_job_install_shop_idx)', ['job_changes as jc']), 'jc.job_id', 'w.job_id')
     .where('jc.shop_id', s.shopId)
     .whereNotNull('w.cause_code');
   if (s.installType) q.where('jc.install_type', s.installType);
@@ -100,19 +103,27 @@ export const repeatsQuery = (knex: Knex, s: PatternScope) => {
  * another job with the same VIN that started no later than `windowDays` after
  * `a` closed, for the same symptom (the trees' symptom) or ending at the same
  * cause. Each pair is a row; the filters apply to the fixed walk.
+ *
+ * Only VINs on two or more jobs can come back, so the join starts from those
+ * (STRAIGHT_JOIN keeps that order): the work then grows with the shop's
+ * returning cars, not with the length of the range.
  */
-export const comebacksQuery = (knex: Knex, s: PatternScope, windowDays: number) =>
-  scopedWalks(knex, s, 'a')
+export const comebacksQuery = (knex: Knex, s: PatternScope, windowDays: number) => {
+  const returning = knex('jobs').where('shop_id', s.shopId).whereNotNull('vin').where('vin', '<>', '').groupBy('vin').havingRaw('COUNT(*) > 1').select('vin');
+  const q = knex
+    .from(returning.as('rv'))
+    .join('jobs as ja', function () {
+      this.on('ja.vin', '=', 'rv.vin').andOnVal('ja.shop_id', '=', s.shopId);
+    })
+    .join('walks as a', 'a.job_id', 'ja.id');
+  applyScope(knex, q, s, 'a');
+  return q
     .where('a.outcome', 'fixed')
-    .join('jobs as ja', 'ja.id', 'a.job_id')
-    .where('ja.shop_id', s.shopId)
-    .whereNotNull('ja.vin')
-    .where('ja.vin', '<>', '')
     .join('jobs as jb', function () {
-      this.on('jb.shop_id', '=', 'ja.shop_id').andOn('jb.vin', '=', 'ja.vin').andOn('jb.id', '<>', 'ja.id');
+      this.on('jb.vin', '=', 'rv.vin').andOnVal('jb.shop_id', '=', s.shopId).andOn('jb.id', '<>', 'ja.id');
     })
     .join('walks as b', function () {
-      this.on('b.shop_id', '=', 'jb.shop_id').andOn('b.job_id', '=', 'jb.id');
+      this.on('b.job_id', '=', 'jb.id').andOnVal('b.shop_id', '=', s.shopId);
     })
     .join('trees as ta', 'ta.id', 'a.tree_id')
     .join('trees as tb', 'tb.id', 'b.tree_id')
@@ -120,7 +131,7 @@ export const comebacksQuery = (knex: Knex, s: PatternScope, windowDays: number) 
     .whereRaw('b.started_at <= a.finished_at + INTERVAL ? DAY', [windowDays])
     .where((w) => w.whereRaw('tb.symptom = ta.symptom').orWhereRaw('(b.cause_code IS NOT NULL AND b.cause_code = a.cause_code)'))
     .select(
-      'ja.vin',
+      knex.raw('STRAIGHT_JOIN ja.vin'),
       'ja.vehicle_year',
       'ja.make',
       'ja.model',
@@ -142,6 +153,7 @@ export const comebacksQuery = (knex: Knex, s: PatternScope, windowDays: number) 
       'b.started_at as b_at',
     )
     .orderBy([{ column: 'b.started_at', order: 'desc' }, { column: 'b.id', order: 'desc' }, { column: 'a.id', order: 'desc' }]);
+};
 
 /** Walks ended as referred or not fixed, per tree, among all finished walks of that tree. */
 export const unresolvedQuery = (knex: Knex, s: PatternScope) =>

@@ -20,7 +20,7 @@ export type { DrillSpec, PatternScope } from './pattern-queries';
 type Num = number | string | null;
 
 export interface TotalsRow { finished: Num; with_cause: Num; fixed: Num; not_fixed: Num; referred: Num }
-export interface CauseCountRow { cause_code: string; walks: Num; jobs: Num }
+export interface CauseCountRow { cause_code: string; walks: Num }
 export interface RepeatCountRow { install_type: string; cause_code: string; jobs: Num; walks: Num; last_found_at: Date }
 export interface ComebackPairRow {
   vin: string;

@@ -28,7 +28,6 @@ export function exportColumns(table: ExportTable, ctx: Ctx): CsvColumn<any>[] {
         ['cause_code', (r) => r.cause_code],
         ['cause', (r) => t(r.cause_code)],
         ['walks', (r) => num(r.walks)],
-        ['jobs', (r) => num(r.jobs)],
       ]);
     case 'repeats':
       return cols<RepeatCountRow>([

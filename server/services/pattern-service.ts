@@ -146,7 +146,7 @@ export function createPatternService(knex: Knex) {
           cameBack: cameBack.size,
           comebacks: comebacks.length,
         },
-        causes: causes.map((r) => ({ code: r.cause_code, title: title(r.cause_code)!, walks: num(r.walks), jobs: num(r.jobs), share: finished ? num(r.walks) / finished : 0 })),
+        causes: causes.map((r) => ({ code: r.cause_code, title: title(r.cause_code)!, walks: num(r.walks), share: finished ? num(r.walks) / finished : 0 })),
         repeats: repeats.map((r) => ({
           installType: r.install_type as InstallType,
           code: r.cause_code,

@@ -90,7 +90,6 @@ export const causeRowSchema = z.object({
   code: z.string(),
   title: z.string(),
   walks: z.number(),
-  jobs: z.number(),
   /** Walks that found this cause, as a share (0–1) of all finished walks in the range. */
   share: z.number(),
 });

@@ -80,7 +80,7 @@ describe('Patterns API', () => {
     const owner = await signedIn(t.app, shop.people.owner.email);
     const res = await owner.get(`/api/patterns?${RANGE}`);
     expect(res.body.totals).toMatchObject({ finished: 3, withCause: 2, fixed: 2, notFixed: 1 });
-    expect(res.body.causes).toEqual([{ code: 'port-left-open', title: 'Port left open', walks: 2, jobs: 2, share: 2 / 3 }]);
+    expect(res.body.causes).toEqual([{ code: 'port-left-open', title: 'Port left open', walks: 2, share: 2 / 3 }]);
     const dflt = await owner.get('/api/patterns');
     const days = (Date.parse(dflt.body.filters.to) - Date.parse(dflt.body.filters.from)) / 86_400_000;
     expect(days).toBe(181);
@@ -135,7 +135,7 @@ describe('Patterns API', () => {
     expect(rows[1][11]).toBe('20');
 
     const causes = await lead.get(`/api/patterns/export/causes.csv?${RANGE}&installType=throttle_body`);
-    expect(causes.text).toBe('cause_code,cause,walks,jobs\r\nport-left-open,Port left open,1,1\r\n');
+    expect(causes.text).toBe('cause_code,cause,walks\r\nport-left-open,Port left open,1\r\n');
     const none = await lead.get(`/api/patterns/export/repeats.csv?${RANGE}`);
     expect(none.text).toBe('install_type,cause_code,cause,jobs,walks,last_found_at\r\n');
     const missing = await lead.get(`/api/patterns/export/secrets.csv?${RANGE}`);

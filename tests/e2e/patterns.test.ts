@@ -64,7 +64,7 @@ describe('Patterns screen in Chromium', () => {
       await screenshot(page, `patterns-${name}`);
 
       // Tables are tables on a wide screen and lists of cards on a phone.
-      expect(await page.locator('[data-testid="table-causes"] [role="columnheader"]').count()).toBe(viewport === DESKTOP ? 4 : 0);
+      expect(await page.locator('[data-testid="table-causes"] [role="columnheader"]').count()).toBe(viewport === DESKTOP ? 3 : 0);
 
       // Sorting by cause name puts them in alphabetical order.
       await page.getByTestId('table-causes-sort-cause').click();
