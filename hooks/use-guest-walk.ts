@@ -1,9 +1,9 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { GuestLinkClosed, GuestWalkState } from '@/shared/schemas/guest-links';
 import type { WalkFinish, WalkPhoto, WalkStepAnswer } from '@/shared/schemas/walks';
-import { apiErrorSchema } from '@/shared/schemas/api-error';
 import type { PhotoFile, WalkSource } from '@/components/walk/walk-source';
-import { ApiError, api } from './api-client';
+import { api } from './api-client';
+import { uploadPhoto } from './upload';
 
 /** Query keys for the guest's side of a link. */
 export const guestWalkKeys = {
@@ -51,35 +51,10 @@ export function useAcknowledgeSafety(linkId: number) {
   });
 }
 
-/** Multipart upload with progress (fetch has none) to the guest photo route; refusals keep the server's words. */
+/** Multipart upload with progress to the guest photo route; refusals keep the server's words. */
 export function uploadGuestPhoto(linkId: number, file: PhotoFile, step: string, onProgress?: (fraction: number) => void): Promise<WalkPhoto> {
-  return new Promise((resolve, reject) => {
-    const form = new FormData();
-    form.append('step', step);
-    if ('blob' in file) form.append('photo', file.blob, file.name);
-    else form.append('photo', file as unknown as Blob);
-    const xhr = new XMLHttpRequest();
-    xhr.open('POST', `/api${guestPath(linkId)}/photos`);
-    xhr.withCredentials = true;
-    xhr.setRequestHeader('X-Baywalk-Request', '1');
-    xhr.setRequestHeader('Accept', 'application/json');
-    xhr.upload.onprogress = (e) => {
-      if (e.lengthComputable && onProgress) onProgress(e.loaded / e.total);
-    };
-    xhr.onerror = () => reject(new ApiError(0, 'network', 'The photo did not reach the shop. Check the connection and try again.'));
-    xhr.onload = () => {
-      let body: unknown;
-      try {
-        body = JSON.parse(xhr.responseText);
-      } catch {
-        body = undefined;
-      }
-      if (xhr.status >= 200 && xhr.status < 300) return resolve((body as { photo: WalkPhoto }).photo);
-      const parsed = apiErrorSchema.safeParse(body);
-      reject(parsed.success ? new ApiError(xhr.status, parsed.data.error.code, parsed.data.error.message) : new ApiError(xhr.status, 'http', `The server answered ${xhr.status}. Try again in a moment.`));
-    };
-    xhr.send(form);
-  });
+  const target = { path: `${guestPath(linkId)}/photos`, unreachable: 'The photo did not reach the shop. Check the connection and try again.' };
+  return uploadPhoto(target, file, step, onProgress);
 }
 
 /** The walk screen's data source for a guest: the same screen as staff, through the guest routes of one link. */
