@@ -3,7 +3,7 @@ import { forgotPasswordSchema } from '@/shared/schemas/auth';
 import { useForgotPassword } from '@/hooks/use-session';
 import { Button } from '@/components/button';
 import { Notice } from '@/components/notice';
-import { TextField } from '@/components/forms/text-field';
+import { EmailField } from '@/components/forms/credential-fields';
 import { FormActions } from '@/components/forms/form-actions';
 import { useZodForm } from '@/components/forms/use-zod-form';
 import { space } from '@/components/theme';
@@ -26,17 +26,7 @@ export function ForgotPasswordForm() {
         </Notice>
       ) : (
         <>
-          <TextField
-            label="E-mail"
-            value={form.values.email}
-            onChangeText={(v) => form.setValue('email', v)}
-            error={form.errors.email}
-            autoComplete="email"
-            inputMode="email"
-            autoCapitalize="none"
-            onSubmitEditing={submit}
-            testID="forgot-email"
-          />
+          <EmailField {...form.field('email')} onSubmitEditing={submit} testID="forgot-email" />
           <FormActions formError={form.formError} errorTitle="Not sent">
             <Button label="Send the link" onPress={submit} busy={forgot.isPending} testID="forgot-submit" />
           </FormActions>

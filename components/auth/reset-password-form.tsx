@@ -3,12 +3,12 @@ import { useRouter } from 'expo-router';
 import { resetPasswordSchema } from '@/shared/schemas/auth';
 import { useResetLink, useResetPassword } from '@/hooks/use-session';
 import { Button } from '@/components/button';
-import { Notice } from '@/components/notice';
-import { TextField } from '@/components/forms/text-field';
+import { PasswordField } from '@/components/forms/credential-fields';
 import { FormActions } from '@/components/forms/form-actions';
 import { useZodForm } from '@/components/forms/use-zod-form';
 import { colors, space } from '@/components/theme';
-import { AuthHeading, AuthLinks } from './auth-links';
+import { AuthHeading } from './auth-links';
+import { LinkRefused } from './link-refused';
 
 /** Sets a new password from an e-mailed link, then signs in and opens the app. */
 export function ResetPasswordForm({ token }: { token: string }) {
@@ -23,27 +23,25 @@ export function ResetPasswordForm({ token }: { token: string }) {
 
   if (!token || link.isError) {
     return (
-      <View style={styles.col} testID="reset-link-refused">
-        <AuthHeading title="Choose a new password" />
-        <Notice tone="error" title="This link cannot be used">
-          {link.error?.message ?? 'The link is missing its code. Open the link from the e-mail again.'}
-        </Notice>
-        <AuthLinks links={[{ href: '/forgot-password', label: 'Ask for a new link' }, { href: '/sign-in', label: 'Sign in' }]} />
-      </View>
+      <LinkRefused
+        testID="reset-link-refused"
+        heading="Choose a new password"
+        title="This link cannot be used"
+        error={link.error}
+        links={[{ href: '/forgot-password', label: 'Ask for a new link' }, { href: '/sign-in', label: 'Sign in' }]}
+      />
     );
   }
   if (link.isPending) return <ActivityIndicator color={colors.accent} />;
   return (
     <View style={styles.col} testID="reset-form">
       <AuthHeading title="Choose a new password">{`For ${link.data.email} at ${link.data.shopName}.`}</AuthHeading>
-      <TextField
+      <PasswordField
+        fresh
         label="New password"
         hint="At least 10 characters."
-        value={form.values.password}
-        onChangeText={(v) => form.setValue('password', v)}
+        {...form.field('password')}
         error={form.errors.password ?? form.errors.token}
-        secureTextEntry
-        autoComplete="new-password"
         onSubmitEditing={submit}
         testID="reset-password"
       />

@@ -2,7 +2,7 @@ import { View, StyleSheet } from 'react-native';
 import { signInSchema } from '@/shared/schemas/auth';
 import { useSignIn } from '@/hooks/use-session';
 import { Button } from '@/components/button';
-import { TextField } from '@/components/forms/text-field';
+import { EmailField, PasswordField } from '@/components/forms/credential-fields';
 import { FormActions } from '@/components/forms/form-actions';
 import { useZodForm } from '@/components/forms/use-zod-form';
 import { space } from '@/components/theme';
@@ -19,26 +19,8 @@ export function SignInForm() {
   return (
     <View style={styles.col} testID="sign-in-form">
       <AuthHeading title="Sign in" />
-      <TextField
-        label="E-mail"
-        value={form.values.email}
-        onChangeText={(v) => form.setValue('email', v)}
-        error={form.errors.email}
-        autoComplete="email"
-        inputMode="email"
-        autoCapitalize="none"
-        testID="sign-in-email"
-      />
-      <TextField
-        label="Password"
-        value={form.values.password}
-        onChangeText={(v) => form.setValue('password', v)}
-        error={form.errors.password}
-        secureTextEntry
-        autoComplete="current-password"
-        onSubmitEditing={submit}
-        testID="sign-in-password"
-      />
+      <EmailField {...form.field('email')} testID="sign-in-email" />
+      <PasswordField label="Password" {...form.field('password')} onSubmitEditing={submit} testID="sign-in-password" />
       <FormActions formError={form.formError} errorTitle="Not signed in">
         <Button label="Sign in" onPress={submit} busy={signIn.isPending} testID="sign-in-submit" />
       </FormActions>

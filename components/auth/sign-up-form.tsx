@@ -3,6 +3,7 @@ import { signUpSchema } from '@/shared/schemas/auth';
 import { useSignUp } from '@/hooks/use-session';
 import { Button } from '@/components/button';
 import { TextField } from '@/components/forms/text-field';
+import { EmailField, PasswordField } from '@/components/forms/credential-fields';
 import { FormActions } from '@/components/forms/form-actions';
 import { useZodForm } from '@/components/forms/use-zod-form';
 import { space } from '@/components/theme';
@@ -19,26 +20,14 @@ export function SignUpForm() {
   return (
     <View style={styles.col} testID="sign-up-form">
       <AuthHeading title="Open your shop on Baywalk">You become its owner and can invite your team afterwards.</AuthHeading>
-      <TextField label="Shop name" value={form.values.shopName} onChangeText={(v) => form.setValue('shopName', v)} error={form.errors.shopName} autoComplete="organization" testID="sign-up-shop" />
-      <TextField label="Your name" value={form.values.name} onChangeText={(v) => form.setValue('name', v)} error={form.errors.name} autoComplete="name" testID="sign-up-name" />
-      <TextField
-        label="E-mail"
-        value={form.values.email}
-        onChangeText={(v) => form.setValue('email', v)}
-        error={form.errors.email}
-        autoComplete="email"
-        inputMode="email"
-        autoCapitalize="none"
-        testID="sign-up-email"
-      />
-      <TextField
+      <TextField label="Shop name" {...form.field('shopName')} autoComplete="organization" testID="sign-up-shop" />
+      <TextField label="Your name" {...form.field('name')} autoComplete="name" testID="sign-up-name" />
+      <EmailField {...form.field('email')} testID="sign-up-email" />
+      <PasswordField
+        fresh
         label="Password"
         hint="At least 10 characters. A few words you will remember work well."
-        value={form.values.password}
-        onChangeText={(v) => form.setValue('password', v)}
-        error={form.errors.password}
-        secureTextEntry
-        autoComplete="new-password"
+        {...form.field('password')}
         onSubmitEditing={submit}
         testID="sign-up-password"
       />

@@ -3,6 +3,9 @@ import type { ZodType, output } from 'zod';
 import { ApiError } from '@/hooks/api-client';
 import { fieldMessages } from './field-errors';
 
+/** The keys of a form's values that hold text. */
+type StringKeys<V> = { [K in keyof V]: V[K] extends string ? K : never }[keyof V] & string;
+
 /**
  * Form state checked with the same zod schema the server uses.
  * `values` hold what the fields show (strings for text inputs); `toInput`
@@ -55,5 +58,12 @@ export function useZodForm<V extends Record<string, unknown>, S extends ZodType>
     }
   };
 
-  return { values, setValue, setValues, errors, formError, validate, showError };
+  /** Props binding a text field to one string value: what it shows, its change handler and its message. */
+  const field = <K extends StringKeys<V>>(key: K) => ({
+    value: values[key] as string,
+    onChangeText: (v: string) => setValue(key, v as V[K]),
+    error: errors[key],
+  });
+
+  return { values, setValue, setValues, errors, formError, validate, showError, field };
 }
