@@ -15,7 +15,7 @@ import type { RouteDef } from '../http/route-table';
 import type { SessionUser } from '../http/access';
 import type { Services } from '../services';
 import { AppError } from '../errors';
-import { endSession, startSession } from '../auth/start-session';
+import { endSession, logInAs } from '../auth/start-session';
 
 /** Sign-up, sign-in, sign-out, "who am I" and password reset. */
 export const authRoutes = (s: Services, passport: PassportStatic): RouteDef[] => [
@@ -27,9 +27,7 @@ export const authRoutes = (s: Services, passport: PassportStatic): RouteDef[] =>
     status: 201,
     handler: async ({ req, body }) => {
       const user = await s.auth.signUp(body as SignUp);
-      await startSession(req, user);
-      await s.auth.recordSignIn(user.id);
-      return { user: await s.auth.me(user.id) };
+      return logInAs(req, s.auth, user);
     },
   },
   {
@@ -41,9 +39,7 @@ export const authRoutes = (s: Services, passport: PassportStatic): RouteDef[] =>
     handler: async ({ req, res }) => {
       const user = await authenticate(passport, req, res);
       if (!user) throw new AppError(401, 'bad_credentials', 'That e-mail and password do not match an active account.');
-      await startSession(req, user);
-      await s.auth.recordSignIn(user.id);
-      return { user: await s.auth.me(user.id) };
+      return logInAs(req, s.auth, user);
     },
   },
   {
@@ -81,9 +77,7 @@ export const authRoutes = (s: Services, passport: PassportStatic): RouteDef[] =>
     body: resetPasswordSchema,
     handler: async ({ req, body }) => {
       const user = await s.passwordResets.complete(body as ResetPassword);
-      await startSession(req, user);
-      await s.auth.recordSignIn(user.id);
-      return { user: await s.auth.me(user.id) };
+      return logInAs(req, s.auth, user);
     },
   },
   {

@@ -10,7 +10,7 @@ import {
 } from '@/shared/schemas/people';
 import type { RouteDef } from '../http/route-table';
 import { currentUser } from '../auth/current-user';
-import { startSession } from '../auth/start-session';
+import { logInAs } from '../auth/start-session';
 import type { Services } from '../services';
 import { requestOrigin } from './auth-routes';
 import { idParam } from './people-routes';
@@ -60,9 +60,7 @@ export const invitationRoutes = (s: Services): RouteDef[] => [
     body: acceptInvitationSchema,
     handler: async ({ req, body }) => {
       const user = await s.invitations.accept(body as AcceptInvitation);
-      await startSession(req, user);
-      await s.auth.recordSignIn(user.id);
-      return { user: await s.auth.me(user.id) };
+      return logInAs(req, s.auth, user);
     },
   },
 ];
