@@ -6,7 +6,8 @@ import type { Imported, RetiredTrees, VersionDiff, VersionDoc } from '@/shared/s
 import { createTreeRepository } from '../repositories/tree-repository';
 import { createTreeDraftRepository } from '../repositories/tree-draft-repository';
 import { badRequest, conflict, notFound } from '../errors';
-import { importRefused, iso, parsed, versionInfo } from './tree-authoring-records';
+import { importRefused, versionInfo } from './tree-authoring-records';
+import { iso, parsed } from './tree-rows';
 import type { Author } from './tree-authoring-service';
 
 /** Import and export of tree files, versions with their documents, history and differences. */

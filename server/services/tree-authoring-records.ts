@@ -8,22 +8,14 @@ import type { Draft } from '@/shared/schemas/tree-authoring';
 import type { TreeVersionInfo } from '@/shared/schemas/trees';
 import type { AuthoredVersionRow } from '../repositories/tree-draft-repository';
 import { AppError } from '../errors';
+import { iso, parsed, toVersionInfo } from './tree-rows';
 
-export const iso = (d: Date | string | null | undefined) => (d ? new Date(d).toISOString() : null);
-export const parsed = <T>(v: unknown): T => (typeof v === 'string' ? JSON.parse(v) : v) as T;
 const person = (id: number | null, name: string | null | undefined) => (id ? { id, name: name ?? 'Former staff' } : null);
 
 /** A version as the history lists it. */
 export function versionInfo(row: Omit<AuthoredVersionRow, 'doc'>): TreeVersionInfo & { publishedBy: string | null; updatedBy: string | null; updatedAt: string | null } {
   return {
-    id: row.id,
-    version: row.version,
-    state: row.state,
-    source: row.source,
-    authorName: row.author_name ?? (row.source === 'stock' ? 'Baywalk stock library' : null),
-    note: row.note,
-    createdAt: iso(row.created_at)!,
-    publishedAt: iso(row.published_at),
+    ...toVersionInfo(row),
     publishedBy: row.published_by_name ?? null,
     updatedBy: row.updated_by_name ?? null,
     updatedAt: iso(row.updated_at),

@@ -5,7 +5,8 @@ import type { Draft, DraftSaved, Published } from '@/shared/schemas/tree-authori
 import { createTreeRepository } from '../repositories/tree-repository';
 import { createTreeDraftRepository, type AuthoredVersionRow } from '../repositories/tree-draft-repository';
 import { AppError, badRequest, conflict, notFound } from '../errors';
-import { draftHasErrors, iso, parsed, slugFrom, starterDoc, toDraft } from './tree-authoring-records';
+import { draftHasErrors, slugFrom, starterDoc, toDraft } from './tree-authoring-records';
+import { iso, parsed } from './tree-rows';
 
 /** Who is acting: a signed-in author of a shop. */
 export interface Author {

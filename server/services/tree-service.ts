@@ -1,13 +1,11 @@
 import type { Knex } from 'knex';
-import type { TreeDetail, TreeList, TreeListQuery, TreeSummary, TreeVersionInfo } from '@/shared/schemas/trees';
+import type { TreeDetail, TreeList, TreeListQuery, TreeSummary } from '@/shared/schemas/trees';
 import type { InstallType, Symptom } from '@/trees/tree-format';
 import { validateTree } from '@/trees/validate';
 import { answersToNearestCause, distancesFrom } from '@/trees/graph';
-import { createTreeRepository, type TreeListRow, type TreeVersionRow } from '../repositories/tree-repository';
+import { createTreeRepository, type TreeListRow } from '../repositories/tree-repository';
 import { notFound } from '../errors';
-
-const iso = (d: Date | string | null) => (d === null ? null : new Date(d).toISOString());
-const json = <T>(v: unknown): T => (typeof v === 'string' ? JSON.parse(v) : v) as T;
+import { iso, parsed, toVersionInfo } from './tree-rows';
 
 function toSummary(row: TreeListRow): TreeSummary {
   return {
@@ -15,26 +13,13 @@ function toSummary(row: TreeListRow): TreeSummary {
     slug: row.slug,
     title: row.title,
     symptom: row.symptom as Symptom,
-    installTypes: json<InstallType[]>(row.install_types),
+    installTypes: parsed<InstallType[]>(row.install_types),
     summary: row.summary,
     status: row.status,
     source: row.source,
     publishedVersion: row.published_version ?? null,
     steps: row.step_count === null || row.step_count === undefined ? null : Number(row.step_count),
     updatedAt: iso(row.updated_at)!,
-  };
-}
-
-function toVersionInfo(row: Omit<TreeVersionRow, 'doc'>): TreeVersionInfo {
-  return {
-    id: row.id,
-    version: row.version,
-    state: row.state,
-    source: row.source,
-    authorName: row.author_name ?? (row.source === 'stock' ? 'Baywalk stock library' : null),
-    note: row.note,
-    createdAt: iso(row.created_at)!,
-    publishedAt: iso(row.published_at),
   };
 }
 
@@ -54,7 +39,7 @@ export function createTreeService(knex: Knex) {
       const empty = { steps: [], causes: [], refers: [] };
       if (!published) return { tree: toSummary(row), version: null, versions: versions.map(toVersionInfo), stats: null, findings: [], ...empty };
 
-      const { doc, stats, findings } = validateTree(json(published.doc));
+      const { doc, stats, findings } = validateTree(parsed(published.doc));
       const base = { tree: toSummary(row), versions: versions.map(toVersionInfo), findings };
       if (!doc) return { ...base, version: null, stats: null, ...empty };
 

@@ -7,7 +7,7 @@ import type { TreeStatsAnswer } from '@/shared/schemas/tree-authoring';
 import { createTreeStatsRepository } from '../repositories/tree-stats-repository';
 import { createTreeDraftRepository } from '../repositories/tree-draft-repository';
 import { notFound } from '../errors';
-import { parsed } from './tree-authoring-records';
+import { parsed } from './tree-rows';
 
 const minutes = (s: number | null) => (s === null ? null : Math.round((s / 60) * 10) / 10);
 
