@@ -8,7 +8,7 @@ import { colors, fonts, radius, space, type } from '@/components/theme';
 import type { WalkSource } from './walk-source';
 import type { useStepSender } from './use-step-sender';
 import { CautionPanel } from './caution-panel';
-import { StepBody } from './step-body';
+import { MarkdownText } from '@/components/markdown';
 import { AnswerButtons } from './answer-buttons';
 import { ReadingForm } from './reading-form';
 import { PhotoPanel } from './photo-panel';
@@ -42,7 +42,7 @@ export function StepView({ walk, source, sender, answers }: Props) {
         <Text style={styles.title} accessibilityRole="header" testID="step-title">
           {meta.title}
         </Text>
-        <StepBody markdown={meta.body} />
+        <MarkdownText markdown={meta.body} />
         {meta.kind === 'cause' ? (
           <View style={styles.result} testID="step-cause">
             <Text style={styles.resultHead}>✔ {meta.cause.area}</Text>
