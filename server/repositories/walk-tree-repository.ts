@@ -38,6 +38,19 @@ export function createWalkTreeRepository(knex: Knex) {
         await base(shopId).andWhere('t.id', treeId).andWhere('t.status', 'active').andWhereRaw('v.id = t.published_version_id').andWhere('v.shop_id', shopId).first(),
       );
     },
+    /**
+     * A pinned version by id without its document (the title is read from it
+     * in the database): for callers that already hold the parsed document.
+     */
+    async versionMeta(shopId: number, versionId: number, db: Knex = knex): Promise<PinnedTree | undefined> {
+      const r = await db('tree_versions as v')
+        .join('trees as t', 't.id', 'v.tree_id')
+        .where('t.shop_id', shopId)
+        .andWhere('v.id', versionId)
+        .andWhere('v.shop_id', shopId)
+        .first('v.id as version_id', 'v.tree_id', 'v.version', 't.title', 't.symptom', db.raw("JSON_VALUE(v.doc, '$.title') as doc_title"));
+      return r && { treeId: r.tree_id, versionId: r.version_id, version: r.version, title: r.doc_title ?? r.title, symptom: r.symptom, doc: null };
+    },
     /** A pinned version by id, whatever has been published since. */
     async version(shopId: number, versionId: number, db: Knex = knex): Promise<PinnedTree | undefined> {
       return toPinned(await base(shopId, db).andWhere('v.id', versionId).andWhere('v.shop_id', shopId).first());

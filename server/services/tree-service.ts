@@ -6,6 +6,7 @@ import { answersToNearestCause, distancesFrom } from '@/trees/graph';
 import { createTreeRepository, type TreeListRow } from '../repositories/tree-repository';
 import { notFound } from '../errors';
 import { iso, parsed, toVersionInfo } from './tree-rows';
+import { versionCache } from './version-cache';
 
 function toSummary(row: TreeListRow): TreeSummary {
   return {
@@ -23,6 +24,35 @@ function toSummary(row: TreeListRow): TreeSummary {
   };
 }
 
+/** What the tree page shows of a published document: the validator's figures, steps in walk order, causes and referrals. */
+function publishedView(raw: unknown) {
+  const { doc, stats, findings } = validateTree(raw);
+  if (!doc) return { doc: null, stats: null, findings, steps: [], causes: [], refers: [] };
+  const depth = distancesFrom(doc, doc.machine.initial);
+  const states = doc.machine.states;
+  const steps = [...depth].map(([stepId, d]) => ({
+    id: stepId,
+    kind: states[stepId].meta.kind,
+    title: states[stepId].meta.title,
+    cautions: states[stepId].meta.cautions,
+    depth: d,
+    toCause: answersToNearestCause(doc, stepId),
+  }));
+  const causes = steps.flatMap((s) => {
+    const meta = states[s.id].meta;
+    return meta.kind === 'cause' ? [{ stepId: s.id, code: meta.cause.code, title: meta.title, area: meta.cause.area, fix: meta.cause.fix, shortest: s.depth }] : [];
+  });
+  const refers = steps.flatMap((s) => {
+    const meta = states[s.id].meta;
+    return meta.kind === 'refer' ? [{ stepId: s.id, title: meta.title, to: meta.refer.to, reason: meta.refer.reason }] : [];
+  });
+  causes.sort((a, b) => a.shortest - b.shortest || a.title.localeCompare(b.title));
+  return { doc, stats, findings, steps, causes, refers };
+}
+
+// Shared by every request of this process (the answers are read-only JSON, never mutated).
+const publishedViews = versionCache<ReturnType<typeof publishedView>>();
+
 /** Reading a shop's tree library. Authoring (drafts, publish) builds on the same tables later. */
 export function createTreeService(knex: Knex) {
   const repo = createTreeRepository(knex);
@@ -39,29 +69,10 @@ export function createTreeService(knex: Knex) {
       const empty = { steps: [], causes: [], refers: [] };
       if (!published) return { tree: toSummary(row), version: null, versions: versions.map(toVersionInfo), stats: null, findings: [], ...empty };
 
-      const { doc, stats, findings } = validateTree(parsed(published.doc));
+      // Validation and path analysis depend only on the version's document, which never changes: once per version.
+      const { doc, stats, findings, steps, causes, refers } = publishedViews.get(published.id, () => publishedView(parsed(published.doc)));
       const base = { tree: toSummary(row), versions: versions.map(toVersionInfo), findings };
       if (!doc) return { ...base, version: null, stats: null, ...empty };
-
-      const depth = distancesFrom(doc, doc.machine.initial);
-      const states = doc.machine.states;
-      const steps = [...depth].map(([stepId, d]) => ({
-        id: stepId,
-        kind: states[stepId].meta.kind,
-        title: states[stepId].meta.title,
-        cautions: states[stepId].meta.cautions,
-        depth: d,
-        toCause: answersToNearestCause(doc, stepId),
-      }));
-      const causes = steps.flatMap((s) => {
-        const meta = states[s.id].meta;
-        return meta.kind === 'cause' ? [{ stepId: s.id, code: meta.cause.code, title: meta.title, area: meta.cause.area, fix: meta.cause.fix, shortest: s.depth }] : [];
-      });
-      const refers = steps.flatMap((s) => {
-        const meta = states[s.id].meta;
-        return meta.kind === 'refer' ? [{ stepId: s.id, title: meta.title, to: meta.refer.to, reason: meta.refer.reason }] : [];
-      });
-      causes.sort((a, b) => a.shortest - b.shortest || a.title.localeCompare(b.title));
       return { ...base, version: { ...toVersionInfo(published), doc }, stats, steps, causes, refers };
     },
   };

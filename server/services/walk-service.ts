@@ -40,9 +40,11 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
 
   // Inside a transaction, pass the transaction: a second pooled connection per request can starve the pool.
   async function pinned(shopId: number, w: WalkRow, db: Knex = knex): Promise<{ tree: PinnedTree; doc: TreeDoc }> {
-    const tree = await trees.version(shopId, w.tree_version_id, db);
+    // The document of a version never changes: once parsed, only the small facts are read again.
+    const cached = docCache.get(w.tree_version_id);
+    const tree = cached ? await trees.versionMeta(shopId, w.tree_version_id, db) : await trees.version(shopId, w.tree_version_id, db);
     if (!tree) throw notFound('The tree version of this walk');
-    return { tree, doc: parsedDoc(tree) };
+    return { tree, doc: cached ?? parsedDoc(tree) };
   }
 
   function positionOf(doc: TreeDoc, steps: readonly WalkStepRow[], ctx: WalkContext): WalkPosition {
@@ -71,8 +73,9 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
     return row;
   }
 
-  async function answer(trx: Knex.Transaction, actor: Actor, w: WalkRow, stepRow: WalkStepRow): Promise<WalkStepAnswer> {
-    const { doc } = await pinned(actor.shopId, w, trx);
+  async function answer(trx: Knex.Transaction, actor: Actor, w: WalkRow, stepRow: WalkStepRow, known?: TreeDoc): Promise<WalkStepAnswer> {
+    // A caller that has just replayed the walk passes the document it holds (one query fewer per step).
+    const doc = known ?? (await pinned(actor.shopId, w, trx)).doc;
     const steps = await walks.steps(w.id, trx);
     const { undone } = effectiveSteps(steps);
     const recorded = steps.find((s) => s.id === stepRow.id) ?? stepRow;
@@ -170,7 +173,7 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
         };
         await walks.insertStep(trx, row);
         await walks.update(trx, actor.shopId, w.id, { current_step: result.stepId, step_count: events.length + 1, last_step_at: trx.fn.now(3) });
-        return answer(trx, actor, w, { ...row, created_at: new Date() });
+        return answer(trx, actor, w, { ...row, created_at: new Date() }, doc);
       });
     },
 
@@ -206,7 +209,7 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
         };
         await walks.insertStep(trx, row);
         await walks.update(trx, actor.shopId, w.id, { current_step: last.from_step, step_count: live.length - 1, last_step_at: trx.fn.now(3) });
-        return answer(trx, actor, w, { ...row, created_at: new Date() });
+        return answer(trx, actor, w, { ...row, created_at: new Date() }, doc);
       });
     },
 

@@ -1,0 +1,193 @@
+/// <reference types="node" />
+// npm run bench:load — load benchmark on loopback with autocannon, 50 connections:
+// the walk step append and the tree fetch of the real server, each next to a
+// bare Express endpoint measured in the same run (the ratio is what counts on
+// a shared, noisy machine). Uses its own database (baywalk_bench_load by
+// default) with the demo shop; never touches the product's database.
+import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
+import crypto from 'node:crypto';
+import fs from 'node:fs';
+import net from 'node:net';
+import path from 'node:path';
+import autocannon, { type Result } from 'autocannon';
+import { loadConfig } from '@/server/config';
+import { openDatabase } from '@/server/db';
+import { createServices } from '@/server/services';
+import { seedDemoIfEmpty } from '@/server/seeds/demo-seed';
+import { DEMO_PASSWORD, DEMO_PEOPLE } from '@/server/seeds/demo-people';
+
+const ROOT = path.resolve(__dirname, '..');
+const DB = process.env.BAYWALK_BENCH_DB ?? 'baywalk_bench_load';
+const SECONDS = Number(process.env.BENCH_SECONDS ?? 10);
+const CONNECTIONS = Number(process.env.BENCH_CONNECTIONS ?? 50);
+const WALKS = Number(process.env.BENCH_WALKS ?? 10000);
+/** The paced runs' offered load, across all connections: well below saturation, so latency is service time, not queueing. */
+const RATE = Number(process.env.BENCH_RATE ?? 200);
+const TARGETS = { step: 5, tree: 2 };
+
+// Lean at idle, normal at 2 500 rpm, low vacuum, a hose found off: one walk, four answers, a cause.
+const LEAN_PATH = [
+  { type: 'reading', value: 18, unit: '%' },
+  { type: 'reading', value: 3, unit: '%' },
+  { type: 'reading', value: 15, unit: 'inHg' },
+  { type: 'answer.hose-off' },
+];
+
+const say = (m: string) => console.log(`bench: ${m}`);
+const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
+
+function run(cmd: string, args: string[], env: Record<string, string> = {}) {
+  const res = spawnSync(cmd, args, { cwd: ROOT, env: { ...process.env, ...env }, encoding: 'utf8' });
+  if (res.status !== 0) throw new Error(`${cmd} ${args.join(' ')}: ${res.stdout}${res.stderr}`);
+}
+
+function freePort(): Promise<number> {
+  return new Promise((resolve) => {
+    const s = net.createServer().listen(0, '127.0.0.1', () => {
+      const { port } = s.address() as net.AddressInfo;
+      s.close(() => resolve(port));
+    });
+  });
+}
+
+/** Starts a TypeScript entry point as its own node process and waits for an HTTP answer. */
+async function spawnServer(entry: string, port: number, probe: string, env: Record<string, string>): Promise<ChildProcess> {
+  let out = '';
+  const proc = spawn(process.execPath, ['--import', 'tsx', entry], { cwd: ROOT, env: { ...process.env, ...env, PORT: String(port) }, stdio: ['ignore', 'pipe', 'pipe'] });
+  proc.stdout!.on('data', (d) => (out += d));
+  proc.stderr!.on('data', (d) => (out += d));
+  for (let i = 0; i < 600; i++) {
+    if (proc.exitCode !== null) throw new Error(`${entry} exited: ${out}`);
+    try {
+      await fetch(`http://127.0.0.1:${port}${probe}`);
+      return proc;
+    } catch {
+      await sleep(100);
+    }
+  }
+  throw new Error(`${entry} did not answer: ${out}`);
+}
+
+/** A fresh benchmark database with the schema, the demo shop, one job and WALKS open walks on the lean tree. */
+async function prepareDatabase() {
+  run('bash', ['scripts/db-up.sh', DB]);
+  const sock = fs.readFileSync(path.join(loadConfig().dataDir, 'run', 'socket-path'), 'utf8').trim();
+  run('mariadb', ['--no-defaults', '-S', sock, '-uroot', '-e', `DROP DATABASE IF EXISTS \`${DB}\`; CREATE DATABASE \`${DB}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;`]);
+  run(path.join(ROOT, 'node_modules/.bin/tsx'), ['scripts/migrate.ts'], { BAYWALK_DB_NAME: DB });
+  const config = { ...loadConfig(), db: { ...loadConfig().db, database: DB } };
+  const knex = openDatabase(config.db);
+  try {
+    await seedDemoIfEmpty(knex);
+    const tech = await knex('users').where({ email: DEMO_PEOPLE.find((p) => p.role === 'tech')!.email }).first('id', 'shop_id');
+    const tree = await knex('trees').where({ shop_id: tech.shop_id, slug: 'lean-after-intake-manifold' }).first('id');
+    const services = createServices({ knex, config });
+    const job = await services.jobs.create(tech.shop_id, tech.id, { roNumber: 'BENCH-1', customerName: 'Load Bench', vin: null, vinOverride: false, year: null, make: null, model: null, engine: null, mileage: null, install: [], notes: null } as never);
+    // One walk through the service, then copies of its row: identical open walks at the first step.
+    const first = await services.walks.start({ id: tech.id, shopId: tech.shop_id }, { jobId: job.id, treeId: tree.id });
+    const { id: _id, ...row } = await knex('walks').where({ id: first.id }).first();
+    await knex.batchInsert('walks', Array.from({ length: WALKS - 1 }, () => ({ ...row })), 500);
+    const walkIds: number[] = (await knex('walks').where({ shop_id: tech.shop_id, job_id: job.id }).orderBy('id').select('id')).map((r: { id: number }) => r.id);
+    return { walkIds, treeId: tree.id as number };
+  } finally {
+    await knex.destroy();
+  }
+}
+
+async function signIn(base: string): Promise<string> {
+  const email = DEMO_PEOPLE.find((p) => p.role === 'tech')!.email;
+  const res = await fetch(`${base}/api/auth/sign-in`, {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json', 'X-Baywalk-Request': '1' },
+    body: JSON.stringify({ email, password: DEMO_PASSWORD }),
+  });
+  if (res.status !== 200) throw new Error(`sign-in failed: ${res.status} ${await res.text()}`);
+  return res.headers.getSetCookie().find((c) => c.startsWith('baywalk.sid='))!.split(';')[0];
+}
+
+interface Figures {
+  name: string;
+  rps: number;
+  p50: number;
+  p99: number;
+  requests: number;
+  failed: number;
+}
+
+const figures = (name: string, r: Result): Figures => ({ name, rps: Math.round(r.requests.average), p50: r.latency.p50, p99: r.latency.p99, requests: r.requests.total, failed: r.non2xx + r.errors + r.timeouts });
+
+/** A short warm-up (not counted), then the measured run; `rate` paces the whole run at that many requests per second. */
+async function measure(name: string, opts: Parameters<typeof autocannon>[0], rate?: number): Promise<Figures> {
+  const paced = rate ? { overallRate: rate } : {};
+  await autocannon({ ...opts, ...paced, connections: CONNECTIONS, duration: 2 });
+  const f = figures(name, await autocannon({ ...opts, ...paced, connections: CONNECTIONS, duration: SECONDS }));
+  say(`${name.padEnd(28)} ${String(f.rps).padStart(6)} req/s  p50 ${String(f.p50).padStart(4)} ms  p99 ${String(f.p99).padStart(4)} ms  (${f.requests} requests, ${f.failed} failed)`);
+  return f;
+}
+
+async function main() {
+  say(`preparing ${DB} (demo shop, ${WALKS} open walks)`);
+  const { walkIds, treeId } = await prepareDatabase();
+  const [appPort, barePort] = await Promise.all([freePort(), freePort()]);
+  const app = await spawnServer('server/main.ts', appPort, '/api/health', {
+    NODE_ENV: process.env.BENCH_NODE_ENV ?? 'production',
+    BAYWALK_DB_NAME: DB,
+    BAYWALK_PUBLIC_URL: `http://127.0.0.1:${appPort}`,
+    BAYWALK_LOG_LEVEL: 'warn',
+    BAYWALK_SMTP_HOST: '127.0.0.1',
+    BAYWALK_SMTP_PORT: '9',
+  });
+  const bare = await spawnServer('scripts/bench-bare-server.ts', barePort, '/bare', {});
+  try {
+    const base = `http://127.0.0.1:${appPort}`;
+    const cookie = await signIn(base);
+    const headers = { cookie, 'content-type': 'application/json', 'x-baywalk-request': '1' };
+    // Each connection takes a fresh walk and answers its four steps in order, each with a new client step
+    // id; autocannon resets the context after the fourth request, so the next round takes the next walk.
+    let next = 0;
+    const stepRequests = LEAN_PATH.map((event, i) => ({
+      method: 'POST',
+      headers,
+      setupRequest: (req: object, context: Record<string, unknown>) => {
+        if (i === 0) context.walkId = walkIds[next++ % walkIds.length];
+        return { ...req, path: `/api/walks/${context.walkId}/steps`, body: JSON.stringify({ stepId: crypto.randomUUID(), event }) };
+      },
+    }));
+    const sampleStep = JSON.stringify({ stepId: crypto.randomUUID(), event: LEAN_PATH[0] });
+    const runs = async (rate?: number) => ({
+      bareGet: await measure('bare Express GET', { url: `http://127.0.0.1:${barePort}/bare` }, rate),
+      tree: await measure(`GET /api/trees/${treeId}`, { url: `${base}/api/trees/${treeId}`, headers: { cookie } }, rate),
+      barePost: await measure('bare Express POST (JSON)', { url: `http://127.0.0.1:${barePort}/bare`, method: 'POST', headers: { 'content-type': 'application/json' }, body: sampleStep }, rate),
+      step: await measure('POST /api/walks/:id/steps', { url: base, requests: stepRequests }, rate),
+    });
+
+    say(`saturated: ${CONNECTIONS} connections as fast as they go, ${SECONDS} s per run after a 2 s warm-up`);
+    const saturated = await runs();
+    say(`paced: ${CONNECTIONS} connections sharing ${RATE} requests/s (latency without queueing), ${SECONDS} s per run`);
+    const paced = await runs(RATE);
+    if (next > walkIds.length) say(`warning: ran out of fresh walks (${next} taken of ${walkIds.length}); raise BENCH_WALKS`);
+
+    const ratio = (r: Awaited<ReturnType<typeof runs>>) => ({ step: r.step.p99 / Math.max(1, r.barePost.p99), tree: r.tree.p99 / Math.max(1, r.bareGet.p99) });
+    const ratios = { saturated: ratio(saturated), paced: ratio(paced) };
+    for (const mode of ['saturated', 'paced'] as const) {
+      const r = ratios[mode];
+      say(`${mode.padEnd(9)} step append p99 ${r.step.toFixed(1)}x bare POST (target ≤ ${TARGETS.step}x): ${r.step <= TARGETS.step ? 'met' : 'NOT met'}`);
+      say(`${mode.padEnd(9)} tree fetch  p99 ${r.tree.toFixed(1)}x bare GET  (target ≤ ${TARGETS.tree}x): ${r.tree <= TARGETS.tree ? 'met' : 'NOT met'}`);
+    }
+    const out = path.join(ROOT, 'test-artifacts', 'bench-load.json');
+    fs.mkdirSync(path.dirname(out), { recursive: true });
+    fs.writeFileSync(out, JSON.stringify({ at: new Date().toISOString(), connections: CONNECTIONS, seconds: SECONDS, rate: RATE, saturated, paced, ratios }, null, 2));
+    say(`figures written to ${path.relative(ROOT, out)}`);
+    if ([saturated, paced].some((r) => r.tree.failed + r.step.failed > 0)) {
+      say('some requests failed: the figures above do not measure what they claim');
+      process.exitCode = 1;
+    }
+  } finally {
+    app.kill('SIGTERM');
+    bare.kill('SIGTERM');
+  }
+}
+
+main().catch((err) => {
+  console.error(`bench: ${err instanceof Error ? err.message : err}`);
+  process.exit(1);
+});
