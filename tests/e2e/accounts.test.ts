@@ -1,14 +1,12 @@
 import crypto from 'node:crypto';
-import type { AddressInfo } from 'node:net';
-import type { Server } from 'node:http';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
 import { ROLES, type Role } from '@/shared/roles';
-import { loadConfig } from '@/server/config';
 import { NAV_ITEMS, navItemsFor } from '@/components/nav/nav-items';
 import { DESKTOP, PHONE, launchBrowser, screenshot, watchConsole } from '../support/browser';
-import { createTestApp } from '../support/test-app';
-import { createShopWithPeople, TEST_PASSWORD } from '../support/people';
+import { startTestServer } from '../support/test-app';
+import { signInThroughScreen } from '../support/sign-in-page';
+import { createShopWithPeople } from '../support/people';
 import { linkFrom, startTestMailCatcher } from '../support/mail-catcher';
 
 const VIEWPORTS = [
@@ -17,35 +15,23 @@ const VIEWPORTS = [
 ] as const;
 
 let catcher: Awaited<ReturnType<typeof startTestMailCatcher>>;
-let t: ReturnType<typeof createTestApp>;
-let server: Server;
+let t: Awaited<ReturnType<typeof startTestServer>>;
 let url: string;
 let browser: Browser;
 
 beforeAll(async () => {
   catcher = await startTestMailCatcher();
-  t = createTestApp({ distDir: loadConfig().distDir, ...catcher.appConfig() });
-  server = await new Promise((resolve) => {
-    const s = t.app.listen(0, '127.0.0.1', () => resolve(s));
-  });
-  url = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+  t = await startTestServer(catcher.appConfig());
+  url = t.url;
   browser = await launchBrowser();
 });
 afterAll(async () => {
   await browser?.close();
-  server?.closeAllConnections();
-  await new Promise((r) => server?.close(r));
   await t?.close();
   await catcher?.close();
 });
 
-async function signIn(page: Page, email: string, password = TEST_PASSWORD) {
-  await page.goto(`${url}/sign-in`);
-  await page.getByTestId('sign-in-email').fill(email);
-  await page.getByTestId('sign-in-password').fill(password);
-  await page.getByTestId('sign-in-submit').click();
-  await page.getByTestId('app-shell').waitFor({ timeout: 15_000 });
-}
+const signIn = (page: Page, email: string) => signInThroughScreen(page, url, email);
 
 /** The navigation entries shown, by their test ids, in order. */
 async function navShown(page: Page, wide: boolean): Promise<string[]> {

@@ -2,7 +2,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
 import { DESKTOP, PHONE, launchBrowser, screenshot, watchConsole } from '../support/browser';
 import { startTestServer } from '../support/test-app';
-import { createShopWithPeople, signedIn, TEST_PASSWORD } from '../support/people';
+import { signInThroughScreen } from '../support/sign-in-page';
+import { createShopWithPeople, signedIn } from '../support/people';
 import { installStockTrees } from '@/server/services/tree-stock';
 
 const TREE = 'hiss-at-idle';
@@ -26,13 +27,7 @@ describe('Tree authoring in Chromium', () => {
     await server?.close();
   });
 
-  async function signIn(page: Page, email: string) {
-    await page.goto(server.url + '/sign-in');
-    await page.getByTestId('sign-in-email').fill(email);
-    await page.getByTestId('sign-in-password').fill(TEST_PASSWORD);
-    await page.getByTestId('sign-in-submit').click();
-    await page.waitForURL((url) => url.pathname !== '/sign-in', WAIT);
-  }
+  const signIn = (page: Page, email: string) => signInThroughScreen(page, server.url, email, { timeout: WAIT.timeout });
   const text = (page: Page, id: string) => page.getByTestId(id).innerText();
   const waitForText = (page: Page, id: string, pattern: RegExp) =>
     page.waitForFunction(

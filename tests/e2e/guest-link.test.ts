@@ -1,33 +1,27 @@
 import crypto from 'node:crypto';
-import type { AddressInfo } from 'node:net';
-import type { Server } from 'node:http';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
 import sharp from 'sharp';
-import { loadConfig } from '@/server/config';
 import { installStockTrees } from '@/server/services/tree-stock';
 import { DESKTOP, PHONE, launchBrowser, screenshot, watchConsole } from '../support/browser';
-import { createTestApp } from '../support/test-app';
-import { createShopWithPeople, TEST_PASSWORD, type TestShop } from '../support/people';
+import { startTestServer } from '../support/test-app';
+import { signInThroughScreen } from '../support/sign-in-page';
+import { createShopWithPeople, type TestShop } from '../support/people';
 import { startTestMailCatcher } from '../support/mail-catcher';
 
 // Generous waits: the machine is shared, and each step is a round trip to MariaDB.
 const WAIT = { timeout: 45_000 };
 
 let catcher: Awaited<ReturnType<typeof startTestMailCatcher>>;
-let t: ReturnType<typeof createTestApp>;
-let server: Server;
+let t: Awaited<ReturnType<typeof startTestServer>>;
 let url: string;
 let browser: Browser;
 let shop: TestShop;
 
 beforeAll(async () => {
   catcher = await startTestMailCatcher();
-  t = createTestApp({ distDir: loadConfig().distDir, ...catcher.appConfig() });
-  server = await new Promise((resolve) => {
-    const s = t.app.listen(0, '127.0.0.1', () => resolve(s));
-  });
-  url = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+  t = await startTestServer(catcher.appConfig());
+  url = t.url;
   browser = await launchBrowser();
   shop = await createShopWithPeople(t.knex, 'Guest UI');
   await installStockTrees(t.knex, shop.shopId);
@@ -35,19 +29,11 @@ beforeAll(async () => {
 });
 afterAll(async () => {
   await browser?.close();
-  server?.closeAllConnections();
-  await new Promise((r) => server?.close(r));
   await t?.close();
   await catcher?.close();
 });
 
-async function signIn(page: Page, email: string) {
-  await page.goto(`${url}/sign-in`);
-  await page.getByTestId('sign-in-email').fill(email);
-  await page.getByTestId('sign-in-password').fill(TEST_PASSWORD);
-  await page.getByTestId('sign-in-submit').click();
-  await page.getByTestId('app-shell').waitFor(WAIT);
-}
+const signIn = (page: Page, email: string) => signInThroughScreen(page, url, email, { timeout: WAIT.timeout });
 
 /** Types a reading at the current step, checks the live verdict, and sends it. */
 async function reading(page: Page, stepId: string, value: string, verdict: string) {

@@ -2,7 +2,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
 import { DESKTOP, PHONE, launchBrowser, screenshot, watchConsole } from '../support/browser';
 import { startTestServer } from '../support/test-app';
-import { createShopWithPeople, TEST_PASSWORD, type TestShop } from '../support/people';
+import { signInThroughScreen } from '../support/sign-in-page';
+import { createShopWithPeople, type TestShop } from '../support/people';
 import { installStockTrees, loadStockLibrary } from '@/server/services/tree-stock';
 import { SYMPTOM_LABELS } from '@/trees/tree-format';
 
@@ -23,14 +24,7 @@ describe('Trees screens in Chromium', () => {
     await server?.close();
   });
 
-  async function signIn(page: Page, email: string) {
-    await page.goto(server.url + '/sign-in');
-    await page.getByTestId('sign-in-email').fill(email);
-    await page.getByTestId('sign-in-password').fill(TEST_PASSWORD);
-    await page.getByTestId('sign-in-submit').click();
-    // Each role lands on its own first screen; all that matters here is leaving sign-in.
-    await page.waitForURL((url) => url.pathname !== '/sign-in', { timeout: 30_000 });
-  }
+  const signIn = (page: Page, email: string) => signInThroughScreen(page, server.url, email);
 
   for (const [name, viewport] of [['phone', PHONE], ['desktop', DESKTOP]] as const) {
     it(`shows the library by symptom, searches it, and opens a tree at ${viewport.width}x${viewport.height}`, async () => {

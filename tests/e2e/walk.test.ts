@@ -3,7 +3,8 @@ import sharp from 'sharp';
 import type { Browser, Page } from 'playwright-core';
 import { DESKTOP, PHONE, launchBrowser, screenshot, watchConsole } from '../support/browser';
 import { startTestServer } from '../support/test-app';
-import { createShopWithPeople, TEST_PASSWORD, type TestShop } from '../support/people';
+import { signInThroughScreen } from '../support/sign-in-page';
+import { createShopWithPeople, type TestShop } from '../support/people';
 import { installStockTrees } from '@/server/services/tree-stock';
 
 describe('a job and a walk in Chromium', () => {
@@ -22,13 +23,7 @@ describe('a job and a walk in Chromium', () => {
     await server?.close();
   });
 
-  async function signIn(page: Page, email: string) {
-    await page.goto(server.url + '/sign-in');
-    await page.getByTestId('sign-in-email').fill(email);
-    await page.getByTestId('sign-in-password').fill(TEST_PASSWORD);
-    await page.getByTestId('sign-in-submit').click();
-    await page.waitForURL((url) => url.pathname !== '/sign-in', { timeout: 30_000 });
-  }
+  const signIn = (page: Page, email: string) => signInThroughScreen(page, server.url, email);
   const stepTitle = (page: Page) => page.getByTestId('step-title').innerText();
   const waitForStep = (page: Page, title: string) => page.getByTestId('step-title').filter({ hasText: title }).waitFor({ timeout: 15_000 });
 

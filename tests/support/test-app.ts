@@ -15,10 +15,12 @@ export function createTestApp(overrides: Partial<ReturnType<typeof loadConfig>> 
   return { ...built, config, knex, close: () => knex.destroy() };
 }
 
-/** The app listening on a free loopback port, serving the web build too (for browser tests). */
-export async function startTestServer() {
-  const config = loadConfig();
-  const t = createTestApp({ distDir: config.distDir });
+/**
+ * The app listening on a free loopback port, serving the web build too (for
+ * browser tests). `overrides` change its config, e.g. a mail catcher's appConfig().
+ */
+export async function startTestServer(overrides: Partial<ReturnType<typeof loadConfig>> = {}) {
+  const t = createTestApp({ distDir: loadConfig().distDir, ...overrides });
   const server: Server = await new Promise((resolve) => {
     const s = t.app.listen(0, '127.0.0.1', () => resolve(s));
   });
