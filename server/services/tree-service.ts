@@ -65,12 +65,15 @@ export function createTreeService(knex: Knex) {
     async get(shopId: number, id: number): Promise<TreeDetail> {
       const row = Number.isSafeInteger(id) && id > 0 ? await repo.findById(shopId, id) : undefined;
       if (!row) throw notFound('That tree');
-      const [published, versions] = await Promise.all([repo.findPublished(shopId, row), repo.listVersions(shopId, row.id)]);
+      // Once a version's view is cached, its row in the version list is all that is needed: the 40 KB document is not fetched.
+      const cached = row.published_version_id ? publishedViews.peek(row.published_version_id) : undefined;
+      const [fetched, versions] = await Promise.all([cached ? undefined : repo.findPublished(shopId, row), repo.listVersions(shopId, row.id)]);
+      const published = cached ? versions.find((v) => v.id === row.published_version_id) : fetched;
       const empty = { steps: [], causes: [], refers: [] };
       if (!published) return { tree: toSummary(row), version: null, versions: versions.map(toVersionInfo), stats: null, findings: [], ...empty };
 
       // Validation and path analysis depend only on the version's document, which never changes: once per version.
-      const { doc, stats, findings, steps, causes, refers } = publishedViews.get(published.id, () => publishedView(parsed(published.doc)));
+      const { doc, stats, findings, steps, causes, refers } = cached ?? publishedViews.get(published.id, () => publishedView(parsed(fetched!.doc)));
       const base = { tree: toSummary(row), versions: versions.map(toVersionInfo), findings };
       if (!doc) return { ...base, version: null, stats: null, ...empty };
       return { ...base, version: { ...toVersionInfo(published), doc }, stats, steps, causes, refers };
