@@ -34,7 +34,7 @@ export function SegmentedChoice<T extends string>({ label, options, value, onCha
             <Pressable
               key={o.value}
               accessibilityRole="radio"
-              accessibilityState={{ checked: picked }}
+              aria-checked={picked}
               accessibilityLabel={o.label}
               testID={testID ? `${testID}-${o.value}` : undefined}
               onPress={() => onChange(o.value)}

@@ -87,7 +87,8 @@ function OpenBadge({ n }: { n: number }) {
 function JobCard({ job }: { job: Job }) {
   return (
     <Link href={`/jobs/${job.id}`} asChild>
-      <Pressable accessibilityRole="link" accessibilityLabel={`RO ${job.roNumber}, ${job.customerName}`} testID={`job-card-${job.roNumber}`} style={styles.card}>
+      {/* No separate label: the link is named by the text it shows, so speech and sight agree. */}
+      <Pressable accessibilityRole="link" testID={`job-card-${job.roNumber}`} style={styles.card}>
         <View style={styles.cardTop}>
           <Text style={styles.ro}>RO {job.roNumber}</Text>
           <OpenBadge n={job.openWalks} />

@@ -33,7 +33,7 @@ export function UnitSelect<T extends string>({ label, value, options, onChange, 
             <Pressable
               key={o}
               accessibilityRole="radio"
-              accessibilityState={{ checked: o === value }}
+              aria-checked={o === value}
               accessibilityLabel={o}
               testID={testID ? `${testID}-${o}` : undefined}
               onPress={() => {

@@ -71,7 +71,7 @@ export function NewLinkForm() {
               <Pressable
                 key={t.id}
                 accessibilityRole="radio"
-                accessibilityState={{ checked: picked }}
+                aria-checked={picked}
                 onPress={() => setValue('treeId', t.id)}
                 testID={`link-tree-${t.slug}`}
                 style={[styles.tree, picked && styles.treePicked]}

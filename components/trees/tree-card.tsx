@@ -8,7 +8,8 @@ import { colors, fonts, radius, space, touchTarget, type } from '@/components/th
 export function TreeCard({ tree }: { tree: TreeSummary }) {
   return (
     <Link href={`/trees/${tree.id}`} asChild>
-      <Pressable accessibilityRole="link" accessibilityLabel={tree.title} testID={`tree-card-${tree.slug}`} style={styles.card}>
+      {/* No separate label: the link is named by the text it shows, so speech and sight agree. */}
+      <Pressable accessibilityRole="link" testID={`tree-card-${tree.slug}`} style={styles.card}>
         <Text style={styles.title}>{tree.title} ›</Text>
         {tree.summary ? (
           <Text style={styles.summary} numberOfLines={3}>

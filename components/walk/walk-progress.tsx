@@ -13,7 +13,16 @@ export function WalkProgress({ position }: { position: WalkPosition }) {
       ? 'No cause can be reached from here'
       : `At least ${left} more ${left === 1 ? 'answer' : 'answers'} to a cause`;
   return (
-    <View style={styles.wrap} testID="walk-progress" accessibilityRole="progressbar" accessibilityValue={{ min: 0, max: 100, now: Math.round(fraction * 100) }}>
+    <View
+      style={styles.wrap}
+      testID="walk-progress"
+      role="progressbar"
+      // react-native-web maps aria-* props (not accessibilityValue): a progress bar needs a name and its values.
+      aria-label={`Progress: ${taken} ${taken === 1 ? 'answer' : 'answers'} so far. ${words}`}
+      aria-valuemin={0}
+      aria-valuemax={100}
+      aria-valuenow={Math.round(fraction * 100)}
+    >
       <Text style={styles.text}>
         <Text style={styles.strong}>
           {taken} {taken === 1 ? 'answer' : 'answers'} so far
