@@ -1,6 +1,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import express, { type Express } from 'express';
+import { compressedAssets } from './compressed-assets';
 
 /**
  * Serves the exported web app from dist/ with a single-page fallback.
@@ -9,6 +10,8 @@ import express, { type Express } from 'express';
  */
 export function mountStaticSite(app: Express, distDir: string) {
   const indexFile = path.join(distDir, 'index.html');
+  // Hashed bundles and fonts go out Brotli- or gzip-compressed; the rest (and old browsers) fall through.
+  app.use(compressedAssets(distDir));
   app.use(
     express.static(distDir, {
       index: false,

@@ -1,0 +1,150 @@
+/// <reference types="node" />
+// npm run audit:lighthouse — Lighthouse 12.2.3 (mobile settings: emulated phone,
+// simulated slow 4G and CPU) in Debian's Chromium against the served production
+// build: the sign-in page signed out, and a walk step signed in. Prints the
+// performance and accessibility scores and the main bundle's size. Uses its own
+// database (baywalk_audit_lighthouse) with the demo shop.
+import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
+import crypto from 'node:crypto';
+import fs from 'node:fs';
+import net from 'node:net';
+import path from 'node:path';
+import zlib from 'node:zlib';
+import { loadConfig } from '@/server/config';
+import { openDatabase } from '@/server/db';
+import { createServices } from '@/server/services';
+import { seedDemoIfEmpty } from '@/server/seeds/demo-seed';
+import { DEMO_PASSWORD, DEMO_PEOPLE } from '@/server/seeds/demo-people';
+
+const ROOT = path.resolve(__dirname, '..');
+const DB = process.env.BAYWALK_AUDIT_DB ?? 'baywalk_audit_lighthouse';
+const TARGETS = { performance: 90, accessibility: 95 };
+// The flags tests/support/browser.ts uses: this closed network needs the background traffic off.
+const CHROME_FLAGS = ['--headless=new', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'];
+
+const say = (m: string) => console.log(`audit: ${m}`);
+
+function run(cmd: string, args: string[], env: Record<string, string> = {}) {
+  const res = spawnSync(cmd, args, { cwd: ROOT, env: { ...process.env, ...env }, encoding: 'utf8' });
+  if (res.status !== 0) throw new Error(`${cmd} ${args.join(' ')}: ${res.stdout}${res.stderr}`);
+}
+
+function freePort(): Promise<number> {
+  return new Promise((resolve) => {
+    const s = net.createServer().listen(0, '127.0.0.1', () => {
+      const { port } = s.address() as net.AddressInfo;
+      s.close(() => resolve(port));
+    });
+  });
+}
+
+/** A fresh audit database: schema, demo shop, and one walk with a first answer, so its screen shows a reading step. */
+async function prepare(): Promise<number> {
+  run('bash', ['scripts/db-up.sh', DB]);
+  const sock = fs.readFileSync(path.join(loadConfig().dataDir, 'run', 'socket-path'), 'utf8').trim();
+  run('mariadb', ['--no-defaults', '-S', sock, '-uroot', '-e', `DROP DATABASE IF EXISTS \`${DB}\`; CREATE DATABASE \`${DB}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;`]);
+  run(path.join(ROOT, 'node_modules/.bin/tsx'), ['scripts/migrate.ts'], { BAYWALK_DB_NAME: DB });
+  const config = { ...loadConfig(), db: { ...loadConfig().db, database: DB } };
+  const knex = openDatabase(config.db);
+  try {
+    await seedDemoIfEmpty(knex);
+    const tech = await knex('users').where({ email: DEMO_PEOPLE.find((p) => p.role === 'tech')!.email }).first('id', 'shop_id');
+    const tree = await knex('trees').where({ shop_id: tech.shop_id, slug: 'lean-after-intake-manifold' }).first('id');
+    const s = createServices({ knex, config });
+    const actor = { id: tech.id, shopId: tech.shop_id };
+    const job = await s.jobs.create(tech.shop_id, tech.id, { roNumber: 'AUDIT-1', customerName: 'Lighthouse Audit', vin: null, vinOverride: false, year: 2016, make: 'Chevrolet', model: 'Camaro', engine: '6.2 L V8', mileage: 41000, install: [{ type: 'intake_manifold', text: '' }], notes: null } as never);
+    const walk = await s.walks.start(actor, { jobId: job.id, treeId: tree.id });
+    await s.walks.step(actor, walk.id, { stepId: crypto.randomUUID(), event: { type: 'reading', value: 18, unit: '%' }, note: null });
+    return walk.id;
+  } finally {
+    await knex.destroy();
+  }
+}
+
+async function startServer(port: number): Promise<ChildProcess> {
+  const proc = spawn(process.execPath, ['--import', 'tsx', 'server/main.ts'], {
+    cwd: ROOT,
+    env: { ...process.env, NODE_ENV: 'production', PORT: String(port), BAYWALK_DB_NAME: DB, BAYWALK_PUBLIC_URL: `http://127.0.0.1:${port}`, BAYWALK_LOG_LEVEL: 'warn', BAYWALK_SMTP_HOST: '127.0.0.1', BAYWALK_SMTP_PORT: '9' },
+    stdio: 'ignore',
+  });
+  for (let i = 0; i < 600; i++) {
+    try {
+      await fetch(`http://127.0.0.1:${port}/api/health`);
+      return proc;
+    } catch {
+      await new Promise((r) => setTimeout(r, 100));
+    }
+  }
+  throw new Error('the server did not start');
+}
+
+/** The entry bundle(s) the web build ships, raw and gzipped. */
+function bundleSizes() {
+  const dir = path.join(ROOT, 'dist', '_expo', 'static', 'js', 'web');
+  return fs
+    .readdirSync(dir)
+    .filter((f) => f.endsWith('.js'))
+    .map((f) => {
+      const data = fs.readFileSync(path.join(dir, f));
+      return { file: f, raw: data.length, gzip: zlib.gzipSync(data, { level: 9 }).length };
+    })
+    .sort((a, b) => b.raw - a.raw);
+}
+
+async function main() {
+  run('bash', ['-c', 'source scripts/env.sh && ensure_web_build']);
+  say(`preparing ${DB} (demo shop and a walk)`);
+  const walkId = await prepare();
+  const port = await freePort();
+  const server = await startServer(port);
+  const base = `http://127.0.0.1:${port}`;
+  const { default: lighthouse } = await import('lighthouse');
+  const chromeLauncher = await import('chrome-launcher');
+  const chrome = await chromeLauncher.launch({ chromePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium', chromeFlags: CHROME_FLAGS });
+  try {
+    const signIn = await fetch(`${base}/api/auth/sign-in`, {
+      method: 'POST',
+      headers: { 'Content-Type': 'application/json', 'X-Baywalk-Request': '1' },
+      body: JSON.stringify({ email: DEMO_PEOPLE.find((p) => p.role === 'tech')!.email, password: DEMO_PASSWORD }),
+    });
+    const cookie = signIn.headers.getSetCookie().find((c) => c.startsWith('baywalk.sid='))!.split(';')[0];
+    const pages = [
+      { name: 'sign-in', url: `${base}/sign-in`, headers: undefined },
+      { name: 'walk step', url: `${base}/walks/${walkId}`, headers: { Cookie: cookie } },
+    ];
+    const results: Array<{ page: string; performance: number; accessibility: number; lcpMs: number; tbtMs: number; cls: number }> = [];
+    for (const p of pages) {
+      // Default config = mobile: emulated phone screen, simulated slow 4G and 4x CPU slowdown.
+      const res = await lighthouse(p.url, { port: chrome.port, output: 'json', logLevel: 'error', onlyCategories: ['performance', 'accessibility'], extraHeaders: p.headers });
+      if (!res) throw new Error(`Lighthouse returned nothing for ${p.url}`);
+      const lhr = res.lhr;
+      if (lhr.runtimeError) throw new Error(`${p.name}: ${lhr.runtimeError.message}`);
+      const score = (k: string) => Math.round((lhr.categories[k].score ?? 0) * 100);
+      const num = (k: string) => Math.round(lhr.audits[k]?.numericValue ?? NaN);
+      results.push({ page: p.name, performance: score('performance'), accessibility: score('accessibility'), lcpMs: num('largest-contentful-paint'), tbtMs: num('total-blocking-time'), cls: Number((lhr.audits['cumulative-layout-shift']?.numericValue ?? NaN).toFixed(3)) });
+      const failed = Object.values(lhr.audits).filter((a) => a.score !== null && a.score < 1 && lhr.categories.accessibility.auditRefs.some((r) => r.id === a.id && r.weight > 0));
+      for (const a of failed) say(`  ${p.name}: accessibility audit "${a.title}" not passed`);
+      // The final URL must be the page asked for (not bounced to sign-in).
+      if (new URL(lhr.finalDisplayedUrl).pathname !== new URL(p.url).pathname) throw new Error(`${p.name}: ended on ${lhr.finalDisplayedUrl}`);
+    }
+    for (const r of results) {
+      say(`${r.page.padEnd(10)} performance ${r.performance} (≥ ${TARGETS.performance})  accessibility ${r.accessibility} (≥ ${TARGETS.accessibility})  LCP ${r.lcpMs} ms  TBT ${r.tbtMs} ms  CLS ${r.cls}`);
+    }
+    const bundles = bundleSizes();
+    for (const b of bundles) say(`bundle ${b.file}: ${(b.raw / 1024).toFixed(0)} KB raw, ${(b.gzip / 1024).toFixed(0)} KB gzipped`);
+    const out = path.join(ROOT, 'test-artifacts', 'lighthouse.json');
+    fs.mkdirSync(path.dirname(out), { recursive: true });
+    fs.writeFileSync(out, JSON.stringify({ at: new Date().toISOString(), results, bundles }, null, 2));
+    const met = results.every((r) => r.performance >= TARGETS.performance && r.accessibility >= TARGETS.accessibility);
+    say(met ? 'targets met' : 'targets NOT met');
+    if (!met) process.exitCode = 1;
+  } finally {
+    chrome.kill();
+    server.kill('SIGTERM');
+  }
+}
+
+main().catch((err) => {
+  console.error(`audit: ${err instanceof Error ? err.message : err}`);
+  process.exit(1);
+});

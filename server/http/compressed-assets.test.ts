@@ -1,0 +1,65 @@
+/// <reference types="node" />
+import fs from 'node:fs';
+import http from 'node:http';
+import os from 'node:os';
+import path from 'node:path';
+import zlib from 'node:zlib';
+import express from 'express';
+import request from 'supertest';
+import { afterAll, describe, expect, it } from 'vitest';
+import { mountStaticSite } from './static-site';
+
+describe('compressed hashed assets', () => {
+  const dist = fs.mkdtempSync(path.join(os.tmpdir(), 'baywalk-dist-'));
+  const js = 'console.log("a fairly repetitive bundle");\n'.repeat(500);
+  fs.mkdirSync(path.join(dist, '_expo/static/js/web'), { recursive: true });
+  fs.writeFileSync(path.join(dist, '_expo/static/js/web/entry-abc123.js'), js);
+  fs.writeFileSync(path.join(dist, 'index.html'), '<!doctype html><title>Baywalk</title>');
+  fs.writeFileSync(path.join(os.tmpdir(), 'outside-dist.js'), js);
+  const app = express();
+  mountStaticSite(app, dist);
+  afterAll(() => fs.rmSync(dist, { recursive: true, force: true }));
+
+  it('sends Brotli when accepted, gzip otherwise, identity when neither, always cached for a year', async () => {
+    const url = '/_expo/static/js/web/entry-abc123.js';
+    // Raw bytes over a real socket: the test clients would decompress for us.
+    const server = app.listen(0, '127.0.0.1');
+    await new Promise((r) => server.once('listening', r));
+    const br = await new Promise<{ status: number; headers: http.IncomingHttpHeaders; body: Buffer }>((resolve, reject) => {
+      http
+        .get({ host: '127.0.0.1', port: (server.address() as { port: number }).port, path: url, headers: { 'Accept-Encoding': 'gzip, deflate, br, zstd' } }, (res) => {
+          const chunks: Buffer[] = [];
+          res.on('data', (c: Buffer) => chunks.push(c));
+          res.on('end', () => resolve({ status: res.statusCode!, headers: res.headers, body: Buffer.concat(chunks) }));
+        })
+        .on('error', reject);
+    });
+    server.close();
+    expect(br.status).toBe(200);
+    expect(br.headers['content-encoding']).toBe('br');
+    expect(br.headers['content-type']).toMatch(/javascript/);
+    expect(br.headers['cache-control']).toBe('public, max-age=31536000, immutable');
+    expect(br.headers.vary).toMatch(/Accept-Encoding/);
+    expect(zlib.brotliDecompressSync(br.body).toString()).toBe(js);
+    expect(br.body.length).toBeLessThan(js.length / 5);
+
+    const gz = await request(app).get(url).set('Accept-Encoding', 'gzip');
+    expect(gz.headers['content-encoding']).toBe('gzip');
+    expect(gz.text).toBe(js); // supertest inflates gzip
+
+    const plain = await request(app).get(url).set('Accept-Encoding', 'identity');
+    expect(plain.headers['content-encoding']).toBeUndefined();
+    expect(plain.text).toBe(js);
+    expect(plain.headers['cache-control']).toBe('public, max-age=31536000, immutable');
+  });
+
+  it('never reads outside the build folder, and leaves index.html revalidated', async () => {
+    for (const p of ['/_expo/static/..%2f..%2f..%2foutside-dist.js', '/_expo/static/%2e%2e/%2e%2e/%2e%2e/outside-dist.js']) {
+      const res = await request(app).get(p).set('Accept-Encoding', 'br');
+      expect(res.headers['content-encoding'], p).toBeUndefined();
+      expect(res.text ?? '', p).not.toContain('fairly repetitive');
+    }
+    const index = await request(app).get('/jobs').set('Accept-Encoding', 'br');
+    expect(index.headers['cache-control']).toBe('no-cache');
+  });
+});
