@@ -27,10 +27,16 @@ const CONNECTION_CODES = new Set(['ECONNREFUSED', 'ECONNRESET', 'PROTOCOL_CONNEC
 /** Turns driver and library errors into AppErrors; the one place that knows driver codes. */
 export function translateError(err: unknown): AppError | undefined {
   if (err instanceof AppError) return err;
-  const e = err as { errno?: number; code?: string; name?: string; message?: string; type?: string; status?: number };
+  const e = err as { errno?: number; code?: string; name?: string; message?: string; type?: string; status?: number; fatal?: boolean };
   if (!e || typeof e !== 'object') return undefined;
-  if (e.name === 'KnexTimeoutError' || (e.code && CONNECTION_CODES.has(e.code)) || (e.errno && CONNECTION_ERRNOS.has(e.errno))) {
+  // mysql2 marks errors that killed the connection `fatal` (e.g. a ROLLBACK on a connection the server
+  // dropped: "Can't add new command when connection is in closed state"); they carry no errno.
+  if (e.name === 'KnexTimeoutError' || e.fatal === true || (e.code && CONNECTION_CODES.has(e.code)) || (e.errno && CONNECTION_ERRNOS.has(e.errno))) {
     return databaseUnavailable();
+  }
+  // Deadlock or lock wait timeout: the database rolled the transaction back, so nothing was saved; a retry is safe.
+  if (e.errno === 1213 || e.errno === 1205) {
+    return new AppError(503, 'busy', 'Baywalk was too busy to save this just now. Nothing from this request was saved; try again in a moment.');
   }
   if (e.errno === 1062) return conflict('A record with these values already exists.');
   if (e.errno === 1451 || e.errno === 1452) return conflict('This record is linked to others and cannot be changed that way.');

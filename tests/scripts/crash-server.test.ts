@@ -1,7 +1,7 @@
 /// <reference types="node" />
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Knex } from 'knex';
-import { Client, freePort, freshDatabase, knexFor, shopWithTrees, sleep, startServer, startWalks, technician, testDbName, verifyWalks, type ServerProcess, type TechLog } from './crash-support';
+import { Client, freePort, freshDatabase, knexFor, shopWithTrees, sleep, progress, startServer, startWalks, technician, testDbName, verifyWalks, type ServerProcess, type TechLog } from './crash-support';
 
 const TECHS = 20;
 const KILLS = 4;
@@ -44,9 +44,7 @@ describe('server killed with SIGKILL under load', () => {
     const ackedAtKill: number[] = [];
     for (let k = 0; k < KILLS; k++) {
       // Let the technicians get going after each (re)start, then kill mid-traffic.
-      const from = log.acks.length;
-      const until = Date.now() + 20_000;
-      while (log.acks.length < from + 25 && Date.now() < until) await sleep(20);
+      await progress(log, 25, () => server!.output());
       await sleep(Math.random() * 150);
       ackedAtKill.push(log.acks.length);
       await server.kill('SIGKILL');
@@ -54,8 +52,7 @@ describe('server killed with SIGKILL under load', () => {
       // Same port: the clients keep their address and their session cookies.
       server = await startServer({ port, dbName });
     }
-    const from = log.acks.length;
-    while (log.acks.length < from + 25) await sleep(20);
+    await progress(log, 25, () => server!.output());
     stopping = true;
     await Promise.all(techs);
 

@@ -235,6 +235,28 @@ export async function technician(client: Client, walks: number[], stop: () => bo
   }
 }
 
+/** The server's own error reports (unhandled errors first), short enough for a failure message. */
+export function serverErrors(output: string): string {
+  const lines = output.split('\n');
+  const unhandled = lines.filter((l) => l.includes('unhandled error')).map((l) => l.slice(0, 1200));
+  return [...unhandled.slice(0, 3), ...lines.slice(-10)].join('\n');
+}
+
+/** Waits until the technicians have had `count` more steps acknowledged; fails with what they saw after 45 s. */
+export async function progress(log: TechLog, count: number, output: () => string) {
+  const from = log.acks.length;
+  const until = Date.now() + 45_000;
+  while (log.acks.length < from + count) {
+    if (Date.now() > until) {
+      throw new Error(
+        `only ${log.acks.length - from} of ${count} steps acknowledged in 45 s; ${log.unavailable.length} answers 503, ${log.networkErrors} network errors, ` +
+          `unexpected: ${JSON.stringify(log.unexpected.slice(0, 2))}; server said: ${serverErrors(output())}`,
+      );
+    }
+    await sleep(20);
+  }
+}
+
 /**
  * The checks after the faults: every acknowledged step is stored exactly once
  * with the sequence number it was acknowledged with, nothing unacknowledged
