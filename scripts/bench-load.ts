@@ -21,8 +21,8 @@ const DB = process.env.BAYWALK_BENCH_DB ?? 'baywalk_bench_load';
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 10);
 const CONNECTIONS = Number(process.env.BENCH_CONNECTIONS ?? 50);
 const WALKS = Number(process.env.BENCH_WALKS ?? 10000);
-/** The paced runs' offered load, across all connections: well below saturation, so latency is service time, not queueing. */
-const RATE = Number(process.env.BENCH_RATE ?? 200);
+/** The paced runs' offered load, across all connections: about a third of the step append's saturated throughput here, so latency is mostly service time, not queueing. */
+const RATE = Number(process.env.BENCH_RATE ?? 100);
 const TARGETS = { step: 5, tree: 2 };
 
 // Lean at idle, normal at 2 500 rpm, low vacuum, a hose found off: one walk, four answers, a cause.
