@@ -17,7 +17,9 @@ import { seedDemoIfEmpty } from '@/server/seeds/demo-seed';
 import { DEMO_PASSWORD, DEMO_PEOPLE } from '@/server/seeds/demo-people';
 
 const ROOT = path.resolve(__dirname, '..');
-const DB = process.env.BAYWALK_BENCH_DB ?? 'baywalk_bench_load';
+// Its own variable: BAYWALK_BENCH_DB names the patterns benchmark's database, which this script must never drop.
+const DB = process.env.BAYWALK_LOAD_BENCH_DB ?? 'baywalk_bench_load';
+if (!/^\w*bench\w*$/.test(DB)) throw new Error(`bench: refusing to reset "${DB}": the load benchmark's database name must contain "bench"`);
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 10);
 const CONNECTIONS = Number(process.env.BENCH_CONNECTIONS ?? 50);
 const WALKS = Number(process.env.BENCH_WALKS ?? 10000);
