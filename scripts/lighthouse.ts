@@ -18,6 +18,7 @@ import { DEMO_PASSWORD, DEMO_PEOPLE } from '@/server/seeds/demo-people';
 
 const ROOT = path.resolve(__dirname, '..');
 const DB = process.env.BAYWALK_AUDIT_DB ?? 'baywalk_audit_lighthouse';
+if (!/^\w*audit\w*$/.test(DB)) throw new Error(`audit: refusing to reset "${DB}": the audit database name must contain "audit"`);
 const TARGETS = { performance: 90, accessibility: 95 };
 // The flags tests/support/browser.ts uses: this closed network needs the background traffic off.
 const CHROME_FLAGS = ['--headless=new', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'];
