@@ -24,6 +24,8 @@ time_start() {
   printf '%s start: %.1f s to a healthy server\n' "$1" "$(echo "$t1 - $t0" | bc)"
   kill -INT -- -$pid
   wait $pid 2>/dev/null || true
+  # The server may still be closing connections: wait until the port is free.
+  while curl -sf "http://127.0.0.1:$PORT/api/health" >/dev/null; do sleep 0.2; done
 }
 
 time_start cold

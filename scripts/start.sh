@@ -12,4 +12,5 @@ ensure_web_build
 
 export PORT="${PORT:-8080}"
 say "serving on http://127.0.0.1:$PORT  (Ctrl-C stops the server; 'npm run db:down' stops the database)"
-exec npx tsx server/main.ts
+# node itself, not an npx wrapper: Ctrl-C and SIGTERM then reach the server directly.
+exec node --import tsx server/main.ts
