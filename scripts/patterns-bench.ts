@@ -69,13 +69,19 @@ async function main() {
     const today = new Date(last);
     console.log(`Patterns benchmark on ${DB}: ${all.walks} walks, ${all.steps} step records; shop ${shopId} has ${big.n} walks. ${RUNS} runs each after one warm-up; median / max in ms.\n`);
 
+    const long = { from: new Date(today.getTime() - 727 * 86_400_000).toISOString().slice(0, 10), to: today.toISOString().slice(0, 10) };
+    const filters: Array<[string, object]> = [
+      ['install type', { installType: 'intake_manifold' }],
+      ['technician', { techId: tech }],
+      ['tree', { treeId: tree }],
+      ['make and engine', { make: 'Ford', engine: '5.0 L V8' }],
+    ];
+    // Every single filter over both ranges: the join order of some queries depends on the range and the filters.
     const scopes: Array<[string, PatternScope]> = [
       ['26 weeks', resolveFilters(shopId, {}, today).scope],
-      ['104 weeks', resolveFilters(shopId, { from: new Date(today.getTime() - 727 * 86_400_000).toISOString().slice(0, 10), to: today.toISOString().slice(0, 10) }, today).scope],
-      ['26 weeks, install type', resolveFilters(shopId, { installType: 'intake_manifold' }, today).scope],
-      ['26 weeks, technician', resolveFilters(shopId, { techId: tech }, today).scope],
-      ['26 weeks, tree', resolveFilters(shopId, { treeId: tree }, today).scope],
-      ['26 weeks, make and engine', resolveFilters(shopId, { make: 'Ford', engine: '5.0 L V8' }, today).scope],
+      ['104 weeks', resolveFilters(shopId, long, today).scope],
+      ...filters.map(([n, f]): [string, PatternScope] => [`26 weeks, ${n}`, resolveFilters(shopId, f, today).scope]),
+      ...filters.map(([n, f]): [string, PatternScope] => [`104 weeks, ${n}`, resolveFilters(shopId, { ...long, ...f }, today).scope]),
     ];
     const queries: Array<[string, (s: PatternScope) => Knex.QueryBuilder]> = [
       ['totals', (s) => totalsQuery(knex, s)],
@@ -131,6 +137,8 @@ async function main() {
       console.log(`\n  ${name}`);
       console.log(await explain(knex, build(scopes[0][1])));
     }
+    console.log('\n  comebacks, 104 weeks (starts from the returning VINs)');
+    console.log(await explain(knex, comebacksQuery(knex, scopes[1][1], windowDays)));
     for (const [name, i] of [['causes found, install type', 2], ['causes found, make and engine', 5]] as const) {
       console.log(`\n  ${name}`);
       console.log(await explain(knex, causesQuery(knex, scopes[i][1])));
