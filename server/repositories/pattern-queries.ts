@@ -79,17 +79,21 @@ export const causesQuery = (knex: Knex, s: PatternScope) =>
  * the same install type. A job with several install types counts under each.
  */
 export const repeatsQuery = (knex: Knex, s: PatternScope) => {
-  // The (job_id, install_type, shop_id) index answers the join alone; left to itself the optimizer picks (job_id, position) and reads every row.
-  const q = scopedWalks(knex, s)
-    .join(knex.raw('?? USE INDEX (job_changes_job_install_shop_idx)', ['job_changes as jc']), 'jc.job_id', 'w.job_id')
-    .where('jc.shop_id', s.shopId)
-    .whereNotNull('w.cause_code');
+  // The install-type filter is the join itself (jc keeps only that type), so the scope's EXISTS for it would only probe job_changes a second time.
+  const scope = { ...s, installType: undefined };
+  // Over a long range one install type's jobs are fewer than the walks: start from them, (shop, install type, job) index first.
+  const fromInstalls = Boolean(s.installType) && rangeDays(s) > 300;
+  const q = fromInstalls
+    ? applyScope(knex, knex.from(knex.raw('?? USE INDEX (job_changes_shop_install_job_idx)', ['job_changes as jc'])).join('walks as w', 'w.job_id', 'jc.job_id'), scope, 'w')
+    : // The (job_id, install_type, shop_id) index answers the join alone; left to itself the optimizer picks (job_id, position) and reads every row.
+      scopedWalks(knex, scope).join(knex.raw('?? USE INDEX (job_changes_job_install_shop_idx)', ['job_changes as jc']), 'jc.job_id', 'w.job_id');
+  q.where('jc.shop_id', s.shopId).whereNotNull('w.cause_code');
   if (s.installType) q.where('jc.install_type', s.installType);
   return q
     .groupBy('jc.install_type', 'w.cause_code')
     .havingRaw('COUNT(DISTINCT w.job_id) >= 2')
     .select(
-      'jc.install_type',
+      fromInstalls ? knex.raw('STRAIGHT_JOIN jc.install_type') : 'jc.install_type',
       'w.cause_code',
       knex.raw('COUNT(DISTINCT w.job_id) AS jobs'),
       knex.raw('COUNT(DISTINCT w.id) AS walks'),
