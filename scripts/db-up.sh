@@ -10,7 +10,10 @@ ensure_apt mariadbd mariadb-server-core mariadb mariadb-client
 
 DATADIR="$BAYWALK_DATA_DIR/mariadb"
 RUNDIR="$BAYWALK_DATA_DIR/run"
-mkdir -p "$RUNDIR"
+# Each server gets its own temporary directory: several private servers
+# (tests, benchmarks, clones) sharing /tmp can trip over each other's files.
+TMPDIR_DB="$BAYWALK_DATA_DIR/tmp"
+mkdir -p "$RUNDIR" "$TMPDIR_DB"
 PIDFILE="$RUNDIR/mariadb.pid"
 LOG="$RUNDIR/mariadb.err"
 # Unix socket paths are limited to ~107 bytes: fall back to /tmp when deep.
@@ -65,7 +68,7 @@ else
     say "starting MariaDB on 127.0.0.1:$BAYWALK_DB_PORT"
     setsid mariadbd --no-defaults --datadir="$DATADIR" "${ROOT_OPT[@]}" \
       --bind-address=127.0.0.1 --port="$BAYWALK_DB_PORT" --socket="$SOCK" \
-      --pid-file="$PIDFILE" --log-error="$LOG" --skip-name-resolve \
+      --pid-file="$PIDFILE" --log-error="$LOG" --skip-name-resolve --tmpdir="$TMPDIR_DB" \
       --character-set-server=utf8mb4 --collation-server=utf8mb4_unicode_ci \
       --innodb-buffer-pool-size=256M --max-connections=500 \
       </dev/null >/dev/null 2>&1 &
