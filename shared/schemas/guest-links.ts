@@ -1,5 +1,6 @@
 /** Request and answer shapes of guest links: the staff side (/api/guest-links) and the guest side (/api/guest/...). */
 import { z } from 'zod';
+import { optionalText } from './fields';
 import { walkDetailSchema } from './walks';
 import { jobSchema } from './jobs';
 
@@ -16,14 +17,6 @@ export const GUEST_LINK_STATUS_LABELS: Record<GuestLinkStatus, string> = {
   expired: 'Expired',
   revoked: 'Revoked',
 };
-
-const optionalText = (max: number, tooLong: string) =>
-  z
-    .string()
-    .trim()
-    .max(max, tooLong)
-    .nullish()
-    .transform((v) => (v ? v : null));
 
 /** POST /api/guest-links: a published tree for one customer; e-mailed when `send` is true. */
 export const guestLinkCreateSchema = z

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { optionalText } from './fields';
 import { INSTALL_TYPES } from '@/trees/tree-format';
 import { isVinCheckDigitValid, normalizeVin, VIN_LENGTH } from '../vin';
 
@@ -11,14 +12,6 @@ export const installChangeSchema = z.object({
   text: z.string().trim().max(200, 'Keep each change under 200 characters.').default(''),
 });
 export type InstallChange = z.infer<typeof installChangeSchema>;
-
-const optionalText = (max: number, tooLong: string) =>
-  z
-    .string()
-    .trim()
-    .max(max, tooLong)
-    .nullish()
-    .transform((v) => (v ? v : null));
 
 /**
  * A job as created or edited. The VIN must pass the North American check digit
