@@ -4,19 +4,13 @@
 // bare Express endpoint measured in the same run (the ratio is what counts on
 // a shared, noisy machine). Uses its own database (baywalk_bench_load by
 // default) with the demo shop; never touches the product's database.
-import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
 import crypto from 'node:crypto';
 import fs from 'node:fs';
-import net from 'node:net';
 import path from 'node:path';
 import autocannon, { type Result } from 'autocannon';
-import { loadConfig } from '@/server/config';
-import { openDatabase } from '@/server/db';
-import { createServices } from '@/server/services';
-import { seedDemoIfEmpty } from '@/server/seeds/demo-seed';
 import { DEMO_PASSWORD, DEMO_PEOPLE } from '@/server/seeds/demo-people';
+import { ROOT, freePort, freshDemoDatabase, spawnServer } from './bench-support';
 
-const ROOT = path.resolve(__dirname, '..');
 // Its own variable: BAYWALK_BENCH_DB names the patterns benchmark's database, which this script must never drop.
 const DB = process.env.BAYWALK_LOAD_BENCH_DB ?? 'baywalk_bench_load';
 if (!/^\w*bench\w*$/.test(DB)) throw new Error(`bench: refusing to reset "${DB}": the load benchmark's database name must contain "bench"`);
@@ -36,60 +30,18 @@ const LEAN_PATH = [
 ];
 
 const say = (m: string) => console.log(`bench: ${m}`);
-const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
-
-function run(cmd: string, args: string[], env: Record<string, string> = {}) {
-  const res = spawnSync(cmd, args, { cwd: ROOT, env: { ...process.env, ...env }, encoding: 'utf8' });
-  if (res.status !== 0) throw new Error(`${cmd} ${args.join(' ')}: ${res.stdout}${res.stderr}`);
-}
-
-function freePort(): Promise<number> {
-  return new Promise((resolve) => {
-    const s = net.createServer().listen(0, '127.0.0.1', () => {
-      const { port } = s.address() as net.AddressInfo;
-      s.close(() => resolve(port));
-    });
-  });
-}
-
-/** Starts a TypeScript entry point as its own node process and waits for an HTTP answer. */
-async function spawnServer(entry: string, port: number, probe: string, env: Record<string, string>): Promise<ChildProcess> {
-  let out = '';
-  const proc = spawn(process.execPath, ['--import', 'tsx', entry], { cwd: ROOT, env: { ...process.env, ...env, PORT: String(port) }, stdio: ['ignore', 'pipe', 'pipe'] });
-  proc.stdout!.on('data', (d) => (out += d));
-  proc.stderr!.on('data', (d) => (out += d));
-  for (let i = 0; i < 600; i++) {
-    if (proc.exitCode !== null) throw new Error(`${entry} exited: ${out}`);
-    try {
-      await fetch(`http://127.0.0.1:${port}${probe}`);
-      return proc;
-    } catch {
-      await sleep(100);
-    }
-  }
-  throw new Error(`${entry} did not answer: ${out}`);
-}
 
 /** A fresh benchmark database with the schema, the demo shop, one job and WALKS open walks on the lean tree. */
 async function prepareDatabase() {
-  run('bash', ['scripts/db-up.sh', DB]);
-  const sock = fs.readFileSync(path.join(loadConfig().dataDir, 'run', 'socket-path'), 'utf8').trim();
-  run('mariadb', ['--no-defaults', '-S', sock, '-uroot', '-e', `DROP DATABASE IF EXISTS \`${DB}\`; CREATE DATABASE \`${DB}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;`]);
-  run(path.join(ROOT, 'node_modules/.bin/tsx'), ['scripts/migrate.ts'], { BAYWALK_DB_NAME: DB });
-  const config = { ...loadConfig(), db: { ...loadConfig().db, database: DB } };
-  const knex = openDatabase(config.db);
+  const { knex, services, tech, leanTreeId } = await freshDemoDatabase(DB);
   try {
-    await seedDemoIfEmpty(knex);
-    const tech = await knex('users').where({ email: DEMO_PEOPLE.find((p) => p.role === 'tech')!.email }).first('id', 'shop_id');
-    const tree = await knex('trees').where({ shop_id: tech.shop_id, slug: 'lean-after-intake-manifold' }).first('id');
-    const services = createServices({ knex, config });
-    const job = await services.jobs.create(tech.shop_id, tech.id, { roNumber: 'BENCH-1', customerName: 'Load Bench', vin: null, vinOverride: false, year: null, make: null, model: null, engine: null, mileage: null, install: [], notes: null } as never);
+    const job = await services.jobs.create(tech.shopId, tech.id, { roNumber: 'BENCH-1', customerName: 'Load Bench', vin: null, vinOverride: false, year: null, make: null, model: null, engine: null, mileage: null, install: [], notes: null } as never);
     // One walk through the service, then copies of its row: identical open walks at the first step.
-    const first = await services.walks.start({ id: tech.id, shopId: tech.shop_id }, { jobId: job.id, treeId: tree.id });
+    const first = await services.walks.start(tech, { jobId: job.id, treeId: leanTreeId });
     const { id: _id, ...row } = await knex('walks').where({ id: first.id }).first();
     await knex.batchInsert('walks', Array.from({ length: WALKS - 1 }, () => ({ ...row })), 500);
-    const walkIds: number[] = (await knex('walks').where({ shop_id: tech.shop_id, job_id: job.id }).orderBy('id').select('id')).map((r: { id: number }) => r.id);
-    return { walkIds, treeId: tree.id as number };
+    const walkIds: number[] = (await knex('walks').where({ shop_id: tech.shopId, job_id: job.id }).orderBy('id').select('id')).map((r: { id: number }) => r.id);
+    return { walkIds, treeId: leanTreeId };
   } finally {
     await knex.destroy();
   }

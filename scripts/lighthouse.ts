@@ -4,19 +4,14 @@
 // build: the sign-in page signed out, and a walk step signed in. Prints the
 // performance and accessibility scores and the main bundle's size. Uses its own
 // database (baywalk_audit_lighthouse) with the demo shop.
-import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
+import type { ChildProcess } from 'node:child_process';
 import crypto from 'node:crypto';
 import fs from 'node:fs';
-import net from 'node:net';
 import path from 'node:path';
 import zlib from 'node:zlib';
-import { loadConfig } from '@/server/config';
-import { openDatabase } from '@/server/db';
-import { createServices } from '@/server/services';
-import { seedDemoIfEmpty } from '@/server/seeds/demo-seed';
 import { DEMO_PASSWORD, DEMO_PEOPLE } from '@/server/seeds/demo-people';
+import { ROOT, freePort, freshDemoDatabase, run, spawnServer } from './bench-support';
 
-const ROOT = path.resolve(__dirname, '..');
 const DB = process.env.BAYWALK_AUDIT_DB ?? 'baywalk_audit_lighthouse';
 if (!/^\w*audit\w*$/.test(DB)) throw new Error(`audit: refusing to reset "${DB}": the audit database name must contain "audit"`);
 const TARGETS = { performance: 90, accessibility: 95 };
@@ -25,58 +20,29 @@ const CHROME_FLAGS = ['--headless=new', '--no-sandbox', '--disable-gpu', '--disa
 
 const say = (m: string) => console.log(`audit: ${m}`);
 
-function run(cmd: string, args: string[], env: Record<string, string> = {}) {
-  const res = spawnSync(cmd, args, { cwd: ROOT, env: { ...process.env, ...env }, encoding: 'utf8' });
-  if (res.status !== 0) throw new Error(`${cmd} ${args.join(' ')}: ${res.stdout}${res.stderr}`);
-}
-
-function freePort(): Promise<number> {
-  return new Promise((resolve) => {
-    const s = net.createServer().listen(0, '127.0.0.1', () => {
-      const { port } = s.address() as net.AddressInfo;
-      s.close(() => resolve(port));
-    });
-  });
-}
-
 /** A fresh audit database: schema, demo shop, and one walk with a first answer, so its screen shows a reading step. */
 async function prepare(): Promise<number> {
-  run('bash', ['scripts/db-up.sh', DB]);
-  const sock = fs.readFileSync(path.join(loadConfig().dataDir, 'run', 'socket-path'), 'utf8').trim();
-  run('mariadb', ['--no-defaults', '-S', sock, '-uroot', '-e', `DROP DATABASE IF EXISTS \`${DB}\`; CREATE DATABASE \`${DB}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;`]);
-  run(path.join(ROOT, 'node_modules/.bin/tsx'), ['scripts/migrate.ts'], { BAYWALK_DB_NAME: DB });
-  const config = { ...loadConfig(), db: { ...loadConfig().db, database: DB } };
-  const knex = openDatabase(config.db);
+  const { knex, services: s, tech, leanTreeId } = await freshDemoDatabase(DB);
   try {
-    await seedDemoIfEmpty(knex);
-    const tech = await knex('users').where({ email: DEMO_PEOPLE.find((p) => p.role === 'tech')!.email }).first('id', 'shop_id');
-    const tree = await knex('trees').where({ shop_id: tech.shop_id, slug: 'lean-after-intake-manifold' }).first('id');
-    const s = createServices({ knex, config });
-    const actor = { id: tech.id, shopId: tech.shop_id };
-    const job = await s.jobs.create(tech.shop_id, tech.id, { roNumber: 'AUDIT-1', customerName: 'Lighthouse Audit', vin: null, vinOverride: false, year: 2016, make: 'Chevrolet', model: 'Camaro', engine: '6.2 L V8', mileage: 41000, install: [{ type: 'intake_manifold', text: '' }], notes: null } as never);
-    const walk = await s.walks.start(actor, { jobId: job.id, treeId: tree.id });
-    await s.walks.step(actor, walk.id, { stepId: crypto.randomUUID(), event: { type: 'reading', value: 18, unit: '%' }, note: null });
+    const job = await s.jobs.create(tech.shopId, tech.id, { roNumber: 'AUDIT-1', customerName: 'Lighthouse Audit', vin: null, vinOverride: false, year: 2016, make: 'Chevrolet', model: 'Camaro', engine: '6.2 L V8', mileage: 41000, install: [{ type: 'intake_manifold', text: '' }], notes: null } as never);
+    const walk = await s.walks.start(tech, { jobId: job.id, treeId: leanTreeId });
+    await s.walks.step(tech, walk.id, { stepId: crypto.randomUUID(), event: { type: 'reading', value: 18, unit: '%' }, note: null });
     return walk.id;
   } finally {
     await knex.destroy();
   }
 }
 
-async function startServer(port: number): Promise<ChildProcess> {
-  const proc = spawn(process.execPath, ['--import', 'tsx', 'server/main.ts'], {
-    cwd: ROOT,
-    env: { ...process.env, NODE_ENV: 'production', PORT: String(port), BAYWALK_DB_NAME: DB, BAYWALK_PUBLIC_URL: `http://127.0.0.1:${port}`, BAYWALK_LOG_LEVEL: 'warn', BAYWALK_SMTP_HOST: '127.0.0.1', BAYWALK_SMTP_PORT: '9' },
-    stdio: 'ignore',
+/** The production server on the audit database; mail goes nowhere (port 9 refuses). */
+function startServer(port: number): Promise<ChildProcess> {
+  return spawnServer('server/main.ts', port, '/api/health', {
+    NODE_ENV: 'production',
+    BAYWALK_DB_NAME: DB,
+    BAYWALK_PUBLIC_URL: `http://127.0.0.1:${port}`,
+    BAYWALK_LOG_LEVEL: 'warn',
+    BAYWALK_SMTP_HOST: '127.0.0.1',
+    BAYWALK_SMTP_PORT: '9',
   });
-  for (let i = 0; i < 600; i++) {
-    try {
-      await fetch(`http://127.0.0.1:${port}/api/health`);
-      return proc;
-    } catch {
-      await new Promise((r) => setTimeout(r, 100));
-    }
-  }
-  throw new Error('the server did not start');
 }
 
 /** The entry bundle(s) the web build ships, raw and gzipped. */
