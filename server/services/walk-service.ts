@@ -49,14 +49,18 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
 
   function positionOf(doc: TreeDoc, steps: readonly WalkStepRow[], ctx: WalkContext): WalkPosition {
     const events = liveEvents(steps);
-    let pos;
+    const pos = fitted(() => replayWalk(doc, events, ctx));
+    return { ...pos, stepsTaken: events.length, shortestToCause: shortestToCause(doc, pos.stepId) };
+  }
+
+  /** Runs a replay; stored answers that no longer fit the tree are a conflict, not a server error. */
+  function fitted<T>(replay: () => T): T {
     try {
-      pos = replayWalk(doc, events, ctx);
+      return replay();
     } catch (err) {
       if (err instanceof TreeEngineError) throw conflict(`This walk's recorded answers no longer fit its tree: ${err.message}`);
       throw err;
     }
-    return { ...pos, stepsTaken: events.length, shortestToCause: shortestToCause(doc, pos.stepId) };
   }
 
   async function findOpenLocked(trx: Knex.Transaction, actor: Actor, walkId: number) {
@@ -73,13 +77,13 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
     return row;
   }
 
-  async function answer(trx: Knex.Transaction, actor: Actor, w: WalkRow, stepRow: WalkStepRow, known?: TreeDoc): Promise<WalkStepAnswer> {
-    // A caller that has just replayed the walk passes the document it holds (one query fewer per step).
-    const doc = known ?? (await pinned(actor.shopId, w, trx)).doc;
+  async function answer(trx: Knex.Transaction, actor: Actor, w: WalkRow, stepRow: WalkStepRow, known?: { doc: TreeDoc; position?: WalkPosition }): Promise<WalkStepAnswer> {
+    // A caller that has just applied the step passes the document and the position it holds: no second replay.
     const steps = await walks.steps(w.id, trx);
     const { undone } = effectiveSteps(steps);
     const recorded = steps.find((s) => s.id === stepRow.id) ?? stepRow;
-    return { step: toStepRecord(recorded, undone), position: positionOf(doc, steps, contextOf(w)) };
+    const position = known?.position ?? positionOf(known?.doc ?? (await pinned(actor.shopId, w, trx)).doc, steps, contextOf(w));
+    return { step: toStepRecord(recorded, undone), position };
   }
 
   return {
@@ -149,10 +153,10 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
         const { doc } = await pinned(actor.shopId, w, trx);
         const steps = await walks.steps(w.id, trx);
         const events = liveEvents(steps);
-        const ctx = contextOf(w);
-        const from = positionOf(doc, steps, ctx);
-        const result = applyEvent(doc, events, input.event, ctx);
+        // One replay: the engine returns the path, whose last two steps are where the answer was given and where it leads.
+        const result = fitted(() => applyEvent(doc, events, input.event, contextOf(w)));
         if (!result.ok) throw new AppError(409, 'step_refused', result.reason);
+        const fromStep = result.path[result.path.length - 2];
         const reading = input.event.type === 'reading' ? (input.event as Extract<WalkEvent, { type: 'reading' }>) : undefined;
         const row: Omit<WalkStepRow, 'created_at' | 'user_name'> = {
           id: input.stepId,
@@ -162,7 +166,7 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
           kind: 'event',
           event: input.event,
           undoes_step_id: null,
-          from_step: from.stepId,
+          from_step: fromStep,
           to_step: result.stepId,
           verdict: result.verdict ?? null,
           reading_value: reading ? reading.value : null,
@@ -173,7 +177,14 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
         };
         await walks.insertStep(trx, row);
         await walks.update(trx, actor.shopId, w.id, { current_step: result.stepId, step_count: events.length + 1, last_step_at: trx.fn.now(3) });
-        return answer(trx, actor, w, { ...row, created_at: new Date() }, doc);
+        const position: WalkPosition = {
+          stepId: result.stepId,
+          final: result.final,
+          path: result.path,
+          stepsTaken: events.length + 1,
+          shortestToCause: shortestToCause(doc, result.stepId),
+        };
+        return answer(trx, actor, w, { ...row, created_at: new Date() } as WalkStepRow, { doc, position });
       });
     },
 
@@ -209,7 +220,7 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
         };
         await walks.insertStep(trx, row);
         await walks.update(trx, actor.shopId, w.id, { current_step: last.from_step, step_count: live.length - 1, last_step_at: trx.fn.now(3) });
-        return answer(trx, actor, w, { ...row, created_at: new Date() }, doc);
+        return answer(trx, actor, w, { ...row, created_at: new Date() } as WalkStepRow, { doc });
       });
     },
 
