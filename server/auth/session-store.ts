@@ -1,6 +1,7 @@
 import { ConnectSessionKnexStore } from 'connect-session-knex';
 import type { SessionData } from 'express-session';
 import type { Knex } from 'knex';
+import { identityCache } from './identity-cache';
 
 /**
  * connect-session-knex with two traps removed:
@@ -13,22 +14,40 @@ import type { Knex } from 'knex';
  * And one cost removed: rolling sessions "touch" (write back the expiry, a
  * durable write) on EVERY request, reads included. Once a minute per session
  * and process is plenty for a 12-hour session (the load benchmark's finding).
+ * Reads go through the identity cache (identity-cache.ts): a burst of
+ * requests on one session costs one query a second, not one each.
  */
 export class SessionStore extends ConnectSessionKnexStore {
   /** When this process last wrote each session's expiry. */
   private readonly touched = new Map<string, number>();
+  private readonly cached: ReturnType<typeof identityCache>['sessions'];
 
   constructor(knex: Knex) {
     super({ knex, tableName: 'sessions', createTable: false, cleanupInterval: 0 });
     this.ready.catch(() => undefined);
     this.ready = Promise.resolve();
+    this.cached = identityCache(knex).sessions;
   }
 
-  override get(sid: string, cb: (err: unknown, session?: SessionData | null) => void) {
-    return quiet(super.get(sid, cb));
+  override async get(sid: string, cb: (err: unknown, session?: SessionData | null) => void) {
+    let text: string | null;
+    try {
+      text = await this.cached.get(sid, async () => {
+        const stored = await super.get(sid, () => undefined);
+        return stored ? JSON.stringify(stored) : null;
+      });
+    } catch (err) {
+      cb(err);
+      return null;
+    }
+    // A fresh copy each time: express-session changes the object it is given.
+    const session = text === null ? null : (JSON.parse(text) as SessionData);
+    cb(null, session);
+    return session;
   }
   override set(sid: string, session: SessionData, cb?: (err?: unknown) => void) {
     this.remember(sid);
+    this.cached.forget(sid);
     return quiet(super.set(sid, session, cb));
   }
   override touch(sid: string, session: SessionData, cb?: () => void) {
@@ -42,6 +61,7 @@ export class SessionStore extends ConnectSessionKnexStore {
   }
   override destroy(sid: string, cb?: (err?: unknown) => void) {
     this.touched.delete(sid);
+    this.cached.forget(sid);
     return quiet(super.destroy(sid, cb));
   }
 

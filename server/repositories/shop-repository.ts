@@ -1,4 +1,5 @@
 import type { Knex } from 'knex';
+import { identityCache } from '../auth/identity-cache';
 
 export interface ShopRow {
   id: number;
@@ -23,6 +24,8 @@ export function createShopRepository(knex: Knex) {
     },
     async update(id: number, patch: Partial<Pick<ShopRow, 'name' | 'altitude_m' | 'pressure_unit' | 'comeback_window_days'>>): Promise<void> {
       await knex('shops').where({ id }).update(patch);
+      // The shop's name travels with each signed-in person (identity-cache.ts).
+      identityCache(knex).users.clear();
     },
     async count(): Promise<number> {
       const row = await knex('shops').count<{ n: number }[]>({ n: '*' }).first();

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { createTestApp } from '../support/test-app';
+import { IDENTITY_CACHE_MS } from '@/server/auth/identity-cache';
 import { agent, createShopWithPeople, signedIn, TEST_PASSWORD, type TestShop } from '../support/people';
 
 describe('sign-in, sessions and sign-out', () => {
@@ -72,7 +73,19 @@ describe('sign-in, sessions and sign-out', () => {
   it('cuts off a deactivated person at once', async () => {
     const a = await signedIn(t.app, shop.people.support.email);
     expect((await a.get('/api/auth/me')).body.user).not.toBeNull();
+    const owner = await signedIn(t.app, shop.people.owner.email);
+    expect((await owner.patch(`/api/people/${shop.people.support.id}`).send({ active: false })).status).toBe(200);
+    expect((await a.get('/api/auth/me')).body.user).toBeNull();
+    expect((await a.get('/api/jobs')).status).toBe(401);
+    expect((await owner.patch(`/api/people/${shop.people.support.id}`).send({ active: true })).status).toBe(200);
+  });
+
+  it('sees a change written by another process within the identity cache bound (a second)', async () => {
+    const a = await signedIn(t.app, shop.people.support.email);
+    expect((await a.get('/api/auth/me')).body.user).not.toBeNull();
+    // Another server process sharing the database: this one learns of it when its kept copy runs out.
     await t.knex('users').where({ id: shop.people.support.id }).update({ active: false });
+    await new Promise((r) => setTimeout(r, IDENTITY_CACHE_MS + 50));
     expect((await a.get('/api/auth/me')).body.user).toBeNull();
     await t.knex('users').where({ id: shop.people.support.id }).update({ active: true });
   });

@@ -1,5 +1,6 @@
 /// <reference types="node" />
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { IDENTITY_CACHE_MS } from '@/server/auth/identity-cache';
 import crypto from 'node:crypto';
 import type { Knex } from 'knex';
 import { Client, freePort, freshDatabase, knexFor, LEAN_PATH, shopWithTrees, startServer, startWalks, testDbName, verifyWalks, type Ack, type ServerProcess } from './crash-support';
@@ -58,8 +59,11 @@ describe('two servers, one database', () => {
     expect(a.body.history.map((h: { by: { name: string } }) => h.by.name)).toEqual(Array(4).fill(shop.people.tech.name));
     expect(await verifyWalks(knex, shop, [walkId], acks)).toEqual([]);
 
-    // Signing out through one server ends the session for both.
+    // Signing out through one server ends the session for both: at once on that one, and on the other
+    // once its short-lived copy of the session runs out (IDENTITY_CACHE_MS, server/auth/identity-cache.ts).
     expect((await viaTwo.send('POST', '/api/auth/sign-out')).status).toBe(200);
+    expect((await viaTwo.send('GET', `/api/walks/${walkId}`)).status).toBe(401);
+    await new Promise((r) => setTimeout(r, IDENTITY_CACHE_MS + 50));
     const after = new Client(one.url);
     after.cookie = viaOne.cookie;
     expect((await after.send('GET', `/api/walks/${walkId}`)).status).toBe(401);
