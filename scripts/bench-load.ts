@@ -94,7 +94,9 @@ async function main() {
   try {
     const base = `http://127.0.0.1:${appPort}`;
     const cookie = await signIn(base);
-    const headers = { cookie, 'content-type': 'application/json', 'x-baywalk-request': '1' };
+    // Every request says what a browser says it accepts (Chromium's header), so each server may compress as it would for the app.
+    const browser = { 'accept-encoding': 'gzip, deflate, br, zstd' };
+    const headers = { ...browser, cookie, 'content-type': 'application/json', 'x-baywalk-request': '1' };
     // Each connection takes a fresh walk and answers its four steps in order, each with a new client step
     // id; autocannon resets the context after the fourth request, so the next round takes the next walk.
     let next = 0;
@@ -108,9 +110,9 @@ async function main() {
     }));
     const sampleStep = JSON.stringify({ stepId: crypto.randomUUID(), event: LEAN_PATH[0] });
     const runs = async (rate?: number) => ({
-      bareGet: await measure('bare Express GET', { url: `http://127.0.0.1:${barePort}/bare` }, rate),
-      tree: await measure(`GET /api/trees/${treeId}`, { url: `${base}/api/trees/${treeId}`, headers: { cookie } }, rate),
-      barePost: await measure('bare Express POST (JSON)', { url: `http://127.0.0.1:${barePort}/bare`, method: 'POST', headers: { 'content-type': 'application/json' }, body: sampleStep }, rate),
+      bareGet: await measure('bare Express GET', { url: `http://127.0.0.1:${barePort}/bare`, headers: browser }, rate),
+      tree: await measure(`GET /api/trees/${treeId}`, { url: `${base}/api/trees/${treeId}`, headers: { ...browser, cookie } }, rate),
+      barePost: await measure('bare Express POST (JSON)', { url: `http://127.0.0.1:${barePort}/bare`, method: 'POST', headers: { ...browser, 'content-type': 'application/json' }, body: sampleStep }, rate),
       step: await measure('POST /api/walks/:id/steps', { url: base, requests: stepRequests }, rate),
     });
 

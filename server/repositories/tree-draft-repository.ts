@@ -1,4 +1,5 @@
 import type { Knex } from 'knex';
+import { treesChanged } from './tree-changes';
 import type { TreeRow, TreeVersionRow } from './tree-repository';
 
 /** A version row with the names of who wrote, last saved and published it. */
@@ -46,6 +47,7 @@ export function createTreeDraftRepository(knex: Knex) {
     },
     /** Moves the revision on by one if it still is `expected`; false when someone else wrote first. */
     async bumpRevision(trx: Knex.Transaction, shopId: number, treeId: number, expected?: number): Promise<boolean> {
+      treesChanged(knex, trx);
       const q = trx('trees').where({ shop_id: shopId, id: treeId });
       if (expected !== undefined) q.andWhere('revision', expected);
       const n = await q.update({ revision: trx.raw('revision + 1'), updated_at: trx.fn.now(3) });
@@ -57,19 +59,23 @@ export function createTreeDraftRepository(knex: Knex) {
     },
     /** Replaces the document of a draft (only drafts: published versions never change). */
     async updateDraft(trx: Knex.Transaction, shopId: number, versionId: number, fields: { doc: unknown; note?: string; updated_by: number }): Promise<void> {
+      treesChanged(knex, trx);
       const { doc, ...rest } = fields;
       await trx('tree_versions')
         .where({ shop_id: shopId, id: versionId, state: 'draft' })
         .update({ ...rest, doc: JSON.stringify(doc), updated_at: trx.fn.now(3) });
     },
     async deleteDraft(trx: Knex.Transaction, shopId: number, versionId: number): Promise<void> {
+      treesChanged(knex, trx);
       await trx('tree_versions').where({ shop_id: shopId, id: versionId, state: 'draft' }).delete();
     },
     /** Stamps the note and the publisher on a draft about to be published. */
     async stampPublisher(trx: Knex.Transaction, shopId: number, versionId: number, fields: { note: string; published_by: number }): Promise<void> {
+      treesChanged(knex, trx);
       await trx('tree_versions').where({ shop_id: shopId, id: versionId, state: 'draft' }).update(fields);
     },
     async setStatus(trx: Knex.Transaction, shopId: number, treeId: number, status: 'active' | 'retired'): Promise<void> {
+      treesChanged(knex, trx);
       await trx('trees').where({ shop_id: shopId, id: treeId }).update({ status, updated_at: trx.fn.now(3), revision: trx.raw('revision + 1') });
     },
     /** Retired trees of a shop, by title (authors bring them back from here). */

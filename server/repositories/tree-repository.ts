@@ -1,4 +1,5 @@
 import type { Knex } from 'knex';
+import { treesChanged } from './tree-changes';
 import type { TreeListQuery } from '@/shared/schemas/trees';
 
 export interface TreeRow {
@@ -87,11 +88,13 @@ export function createTreeRepository(knex: Knex) {
         .select('v.id', 'v.tree_id', 'v.shop_id', 'v.version', 'v.state', 'v.source', 'v.author_id', 'v.note', 'v.created_at', 'v.published_at', 'u.name as author_name');
     },
     async insertTree(row: Omit<TreeRow, 'id' | 'created_at' | 'updated_at' | 'revision' | 'published_version_id' | 'install_types'> & { install_types: string[] }, trx: Knex = knex): Promise<number> {
+      treesChanged(knex, trx);
       const [id] = await trx('trees').insert({ ...row, install_types: JSON.stringify(row.install_types) });
       return id as number;
     },
     /** Adds a version row (documents are written once and never updated in place). */
     async insertVersion(row: Omit<TreeVersionRow, 'id' | 'created_at' | 'author_name'>, trx: Knex = knex): Promise<number> {
+      treesChanged(knex, trx);
       const [id] = await trx('tree_versions').insert({ ...row, doc: JSON.stringify(row.doc) });
       return id as number;
     },
@@ -101,6 +104,7 @@ export function createTreeRepository(knex: Knex) {
     },
     /** Retires the previously published versions and points the tree at a new one, bumping its revision. */
     async publish(shopId: number, treeId: number, versionId: number, facts: Pick<TreeRow, 'title' | 'symptom' | 'summary'> & { install_types: string[] }, trx: Knex = knex): Promise<void> {
+      treesChanged(knex, trx);
       await trx('tree_versions').where({ shop_id: shopId, tree_id: treeId, state: 'published' }).whereNot('id', versionId).update({ state: 'retired' });
       await trx('tree_versions').where({ shop_id: shopId, tree_id: treeId, id: versionId }).update({ state: 'published', published_at: trx.fn.now(3) });
       await trx('trees')

@@ -24,6 +24,6 @@ export const treeRoutes = (s: Services): RouteDef[] => [
     method: 'get',
     path: '/trees/:id',
     allow: ANY_STAFF,
-    handler: async ({ req, params }) => s.trees.get(currentUser(req).shopId, treeId(params.id)),
+    handler: async ({ req, params }) => s.trees.page(currentUser(req).shopId, treeId(params.id)),
   },
 ];

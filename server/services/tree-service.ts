@@ -7,6 +7,8 @@ import { createTreeRepository, type TreeListRow } from '../repositories/tree-rep
 import { notFound } from '../errors';
 import { iso, parsed, toVersionInfo } from './tree-rows';
 import { versionCache } from './version-cache';
+import { treeWrites } from '../repositories/tree-changes';
+import { shortCache } from '../auth/short-cache';
 
 function toSummary(row: TreeListRow): TreeSummary {
   return {
@@ -53,12 +55,30 @@ function publishedView(raw: unknown) {
 // Shared by every request of this process (the answers are read-only JSON, never mutated).
 const publishedViews = versionCache<ReturnType<typeof publishedView>>();
 
+/**
+ * How long a tree page, once built, answers every request for it in this
+ * process. Any tree write made through the process is seen at once (the
+ * write count is in the key); one made by another server process sharing the
+ * database shows within this time. Technicians open the same few pages all
+ * day, and four queries and 40 KB of JSON each time was most of its cost.
+ */
+export const TREE_PAGE_CACHE_MS = 1000;
+
 /** Reading a shop's tree library. Authoring (drafts, publish) builds on the same tables later. */
 export function createTreeService(knex: Knex) {
   const repo = createTreeRepository(knex);
-  return {
+  const pages = shortCache<string, Readonly<TreeDetail>>(TREE_PAGE_CACHE_MS, 2000);
+  const service = {
     async list(shopId: number, filter: TreeListQuery): Promise<TreeList> {
       return { trees: (await repo.list(shopId, filter)).map(toSummary) };
+    },
+
+    /**
+     * The tree page as the API sends it: kept for a moment and frozen, so the
+     * route table serializes it once for every request it answers.
+     */
+    page(shopId: number, id: number): Promise<Readonly<TreeDetail>> {
+      return pages.get(`${treeWrites(knex)}:${shopId}:${id}`, async () => Object.freeze(await service.get(shopId, id)));
     },
 
     /** One tree with its published document, the validator's figures, its steps in walk order and the causes it can reach. */
@@ -79,4 +99,5 @@ export function createTreeService(knex: Knex) {
       return { ...base, version: { ...toVersionInfo(published), doc }, stats, steps, causes, refers };
     },
   };
+  return service;
 }

@@ -93,6 +93,27 @@ describe('trees API', () => {
     }
   });
 
+  it('answers a repeat fetch with 304 by ETag, and shows a publish made through this server on the very next fetch', async () => {
+    const { trees } = await list();
+    const target = trees.find((x) => x.slug === 'lean-after-intake-manifold')!;
+    const tech = await signedIn(t.app, shop.people.tech.email);
+    const first = await tech.get(`/api/trees/${target.id}`);
+    expect(first.status).toBe(200);
+    expect(first.headers.etag).toMatch(/^"[\w-]+"$/);
+    const again = await tech.get(`/api/trees/${target.id}`).set('If-None-Match', first.headers.etag);
+    expect(again.status).toBe(304);
+
+    const lead = await signedIn(t.app, shop.people.lead.email);
+    const draft = await lead.post(`/api/trees/${target.id}/draft`);
+    expect(draft.status, JSON.stringify(draft.body)).toBe(201);
+    const published = await lead.post(`/api/trees/${target.id}/publish`).send({ revision: draft.body.revision, note: 'Republished unchanged' });
+    expect(published.status, JSON.stringify(published.body)).toBe(200);
+    // Well inside the page cache's second: the write through this process is seen at once.
+    const after = await tech.get(`/api/trees/${target.id}`).set('If-None-Match', first.headers.etag);
+    expect(after.status).toBe(200);
+    expect(treeDetailSchema.parse(after.body).version).toMatchObject({ version: draft.body.version, state: 'published' });
+  });
+
   it("answers 404 for another shop's tree and for ids that are not ids", async () => {
     const a = await signedIn(t.app, shop.people.owner.email);
     for (const id of [String(otherTreeId), '999999999', 'abc', '1.5', '-3']) {
