@@ -9,6 +9,8 @@ export interface SessionUser {
   id: number;
   shopId: number;
   role: string;
+  /** Loaded with the session (passport-setup.ts); absent only right after sign-in. */
+  name?: string;
 }
 
 /**

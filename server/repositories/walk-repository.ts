@@ -107,14 +107,6 @@ export function createWalkRepository(knex: Knex) {
       return Number(n);
     },
 
-    async findStep(trx: Knex, id: string): Promise<WalkStepRow | undefined> {
-      const row: WalkStepRow | undefined = await trx('walk_steps')
-        .leftJoin('users', 'users.id', 'walk_steps.user_id')
-        .where('walk_steps.id', id)
-        .first('walk_steps.*', 'users.name as user_name');
-      return row && { ...row, event: parseJson(row.event), judgement: parseJson(row.judgement) };
-    },
-
     async insertStep(trx: Knex, row: Omit<WalkStepRow, 'created_at' | 'user_name'>): Promise<void> {
       await trx('walk_steps').insert({
         ...row,

@@ -9,7 +9,7 @@ import { idParam } from './job-routes';
 
 const actor = (req: { user?: unknown }) => {
   const u = req.user as SessionUser;
-  return { id: u.id, shopId: u.shopId };
+  return { id: u.id, shopId: u.shopId, name: u.name };
 };
 const walkId = (params: Record<string, string>) => idParam(params.id, 'That walk');
 

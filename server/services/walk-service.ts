@@ -14,6 +14,8 @@ import { effectiveSteps, liveEvents, timeSpentSeconds, toStepRecord, toWalkPhoto
 export interface Actor {
   id: number | null;
   shopId: number;
+  /** Shown as who answered; signed-in people have it from their session. */
+  name?: string | null;
 }
 
 const finishedRefusal = () => conflict('This walk is finished, so it can no longer change. Start a new walk to look again.');
@@ -39,6 +41,15 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
   const jobs = createJobRepository(knex);
 
   // Inside a transaction, pass the transaction: a second pooled connection per request can starve the pool.
+  /** The parsed document of a walk's version: from memory once parsed (a version never changes), else one query. */
+  async function pinnedDoc(shopId: number, w: WalkRow, db: Knex): Promise<TreeDoc> {
+    const cached = docCache.get(w.tree_version_id);
+    if (cached) return cached;
+    const tree = await trees.version(shopId, w.tree_version_id, db);
+    if (!tree) throw notFound('The tree version of this walk');
+    return parsedDoc(tree);
+  }
+
   async function pinned(shopId: number, w: WalkRow, db: Knex = knex): Promise<{ tree: PinnedTree; doc: TreeDoc }> {
     // The document of a version never changes: once parsed, only the small facts are read again.
     const cached = docCache.get(w.tree_version_id);
@@ -69,21 +80,37 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
     return w;
   }
 
-  /** Returns the answer for a step id already recorded (a retry), or throws if the id was used elsewhere. */
-  async function earlier(trx: Knex.Transaction, walkId: number, stepId: string, kind: 'event' | 'undo') {
-    const row = await walks.findStep(trx, stepId);
-    if (!row) return undefined;
-    if (row.walk_id !== walkId || row.kind !== kind) throw conflict('That step id was already used for something else. Reload the walk and try again.');
+  const stepIdTaken = () => conflict('That step id was already used for something else. Reload the walk and try again.');
+
+  /**
+   * The record of a step id already in this walk (a retry), or undefined. An
+   * id used in another walk is found by the insert itself (its primary key).
+   */
+  function earlier(steps: readonly WalkStepRow[], stepId: string, kind: 'event' | 'undo') {
+    const row = steps.find((s) => s.id === stepId);
+    if (row && row.kind !== kind) throw stepIdTaken();
     return row;
   }
 
-  async function answer(trx: Knex.Transaction, actor: Actor, w: WalkRow, stepRow: WalkStepRow, known?: { doc: TreeDoc; position?: WalkPosition }): Promise<WalkStepAnswer> {
-    // A caller that has just applied the step passes the document and the position it holds: no second replay.
-    const steps = await walks.steps(w.id, trx);
-    const { undone } = effectiveSteps(steps);
-    const recorded = steps.find((s) => s.id === stepRow.id) ?? stepRow;
-    const position = known?.position ?? positionOf(known?.doc ?? (await pinned(actor.shopId, w, trx)).doc, steps, contextOf(w));
-    return { step: toStepRecord(recorded, undone), position };
+  /** Records a step; a step id another walk already used is a conflict, not a server error. */
+  async function insertNew(trx: Knex.Transaction, row: Omit<WalkStepRow, 'user_name'>) {
+    try {
+      await walks.insertStep(trx, row);
+    } catch (err) {
+      if ((err as { errno?: number }).errno === 1062) throw stepIdTaken();
+      throw err;
+    }
+  }
+
+  /** The answer to a retry: the record as first stored, and where the walk stands now. */
+  async function retried(trx: Knex.Transaction, actor: Actor, w: WalkRow, steps: readonly WalkStepRow[], seen: WalkStepRow): Promise<WalkStepAnswer> {
+    const position = positionOf(await pinnedDoc(actor.shopId, w, trx), steps, contextOf(w));
+    return { step: toStepRecord(seen, effectiveSteps(steps).undone), position };
+  }
+
+  /** The answer to a step just recorded: built from what the transaction holds, with no read back. */
+  function recorded(actor: Actor, row: Omit<WalkStepRow, 'user_name'>, position: WalkPosition): WalkStepAnswer {
+    return { step: toStepRecord({ ...row, user_name: actor.name ?? null }, new Set()), position };
   }
 
   return {
@@ -145,20 +172,21 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
      * append the step only if the tree accepts the event.
      */
     async step(actor: Actor, walkId: number, input: { stepId: string; event: WalkEvent; note: string | null }): Promise<WalkStepAnswer> {
+      // Five round trips: lock, read the steps, insert, update, commit. The answer is built from what is known.
       return knex.transaction(async (trx) => {
         const w = await findOpenLocked(trx, actor, walkId);
-        const seen = await earlier(trx, w.id, input.stepId, 'event');
-        if (seen) return answer(trx, actor, w, seen);
-        if (w.status !== 'open') throw finishedRefusal();
-        const { doc } = await pinned(actor.shopId, w, trx);
         const steps = await walks.steps(w.id, trx);
+        const seen = earlier(steps, input.stepId, 'event');
+        if (seen) return retried(trx, actor, w, steps, seen);
+        if (w.status !== 'open') throw finishedRefusal();
+        const doc = await pinnedDoc(actor.shopId, w, trx);
         const events = liveEvents(steps);
         // One replay: the engine returns the path, whose last two steps are where the answer was given and where it leads.
         const result = fitted(() => applyEvent(doc, events, input.event, contextOf(w)));
         if (!result.ok) throw new AppError(409, 'step_refused', result.reason);
         const fromStep = result.path[result.path.length - 2];
         const reading = input.event.type === 'reading' ? (input.event as Extract<WalkEvent, { type: 'reading' }>) : undefined;
-        const row: Omit<WalkStepRow, 'created_at' | 'user_name'> = {
+        const row: Omit<WalkStepRow, 'user_name'> = {
           id: input.stepId,
           walk_id: w.id,
           shop_id: actor.shopId,
@@ -174,17 +202,18 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
           judgement: result.judgement ?? null,
           note: input.note,
           user_id: actor.id,
+          // Stamped here, to the millisecond the column keeps, so a retry reads back exactly this answer.
+          created_at: new Date(),
         };
-        await walks.insertStep(trx, row);
-        await walks.update(trx, actor.shopId, w.id, { current_step: result.stepId, step_count: events.length + 1, last_step_at: trx.fn.now(3) });
-        const position: WalkPosition = {
+        await insertNew(trx, row);
+        await walks.update(trx, actor.shopId, w.id, { current_step: result.stepId, step_count: events.length + 1, last_step_at: row.created_at });
+        return recorded(actor, row, {
           stepId: result.stepId,
           final: result.final,
           path: result.path,
           stepsTaken: events.length + 1,
           shortestToCause: shortestToCause(doc, result.stepId),
-        };
-        return answer(trx, actor, w, { ...row, created_at: new Date() } as WalkStepRow, { doc, position });
+        });
       });
     },
 
@@ -192,16 +221,16 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
     async undo(actor: Actor, walkId: number, input: { stepId: string }): Promise<WalkStepAnswer> {
       return knex.transaction(async (trx) => {
         const w = await findOpenLocked(trx, actor, walkId);
-        const seen = await earlier(trx, w.id, input.stepId, 'undo');
-        if (seen) return answer(trx, actor, w, seen);
-        if (w.status !== 'open') throw finishedRefusal();
-        const { doc } = await pinned(actor.shopId, w, trx);
         const steps = await walks.steps(w.id, trx);
+        const seen = earlier(steps, input.stepId, 'undo');
+        if (seen) return retried(trx, actor, w, steps, seen);
+        if (w.status !== 'open') throw finishedRefusal();
+        const doc = await pinnedDoc(actor.shopId, w, trx);
         const { live } = effectiveSteps(steps);
         const last = live.at(-1);
         if (!last) throw conflict('There is nothing to undo: this walk is at its first step.');
         const from = positionOf(doc, steps, contextOf(w));
-        const row: Omit<WalkStepRow, 'created_at' | 'user_name'> = {
+        const row: Omit<WalkStepRow, 'user_name'> = {
           id: input.stepId,
           walk_id: w.id,
           shop_id: actor.shopId,
@@ -217,10 +246,11 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
           judgement: null,
           note: null,
           user_id: actor.id,
+          created_at: new Date(),
         };
-        await walks.insertStep(trx, row);
-        await walks.update(trx, actor.shopId, w.id, { current_step: last.from_step, step_count: live.length - 1, last_step_at: trx.fn.now(3) });
-        return answer(trx, actor, w, { ...row, created_at: new Date() } as WalkStepRow, { doc });
+        await insertNew(trx, row);
+        await walks.update(trx, actor.shopId, w.id, { current_step: last.from_step, step_count: live.length - 1, last_step_at: row.created_at });
+        return recorded(actor, row, positionOf(doc, [...steps, { ...row, user_name: null }], contextOf(w)));
       });
     },
 
