@@ -27,4 +27,17 @@ config.server.enhanceMiddleware = (middleware, server) => {
   };
 };
 
+// zod re-exports all of its ~40 translations (`z.locales`, about 270 KB of the
+// web bundle) although it only ever installs English, which it imports on its
+// own. The app never reads `z.locales`, so the web build resolves that list to
+// the English module alone: `z.locales.<lang>` is undefined in the browser.
+const resolveUpstream = config.resolver.resolveRequest;
+config.resolver.resolveRequest = (context, moduleName, platform) => {
+  const resolve = resolveUpstream ?? context.resolveRequest;
+  if (platform === 'web' && moduleName === '../locales/index.js' && /[\\/]node_modules[\\/]zod[\\/]v4[\\/]/.test(context.originModulePath)) {
+    return resolve(context, '../locales/en.js', platform);
+  }
+  return resolve(context, moduleName, platform);
+};
+
 module.exports = config;
