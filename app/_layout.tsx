@@ -1,11 +1,11 @@
 import { useState } from 'react';
 import { ActivityIndicator, View } from 'react-native';
 import { Slot } from 'expo-router';
-import { useFonts } from 'expo-font';
 import { QueryClientProvider } from '@tanstack/react-query';
 import { createQueryClient } from '@/hooks/query-client';
+import { useAppFonts } from '@/hooks/use-app-fonts';
 import { SessionGate } from '@/components/auth/session-gate';
-import { colors, fonts } from '@/components/theme';
+import { colors } from '@/components/theme';
 
 /**
  * Root layout: shipped fonts, the query client, and the sign-in gate, declared
@@ -14,13 +14,9 @@ import { colors, fonts } from '@/components/theme';
  */
 export default function RootLayout() {
   const [queryClient] = useState(createQueryClient);
-  const [loaded, error] = useFonts({
-    [fonts.regular]: require('@/assets/fonts/NunitoSans_400Regular.ttf'),
-    [fonts.semibold]: require('@/assets/fonts/NunitoSans_600SemiBold.ttf'),
-    [fonts.bold]: require('@/assets/fonts/NunitoSans_700Bold.ttf'),
-  });
+  const fontsReady = useAppFonts();
 
-  if (!loaded && !error) {
+  if (!fontsReady) {
     return (
       <View style={{ flex: 1, alignItems: 'center', justifyContent: 'center', backgroundColor: colors.paper }}>
         <ActivityIndicator color={colors.accent} />

@@ -1,9 +1,11 @@
 import type { ReactNode } from 'react';
 import { ScrollView, StyleSheet, Text, View } from 'react-native';
+import { useDismissBootShell } from '@/components/boot-shell';
 import { colors, radius, space, type } from '@/components/theme';
 
 /** The frame of every sign-in screen: the product name, a card with the form, and an optional footer. */
 export function AuthFrame({ children, footer }: { children: ReactNode; footer?: ReactNode }) {
+  useDismissBootShell();
   return (
     <ScrollView style={styles.scroll} contentContainerStyle={styles.outer} keyboardShouldPersistTaps="handled">
       <View style={styles.column}>

@@ -1,6 +1,7 @@
 import type { ReactNode } from 'react';
 import { ActivityIndicator, StyleSheet, View } from 'react-native';
 import { useSession } from '@/hooks/use-session';
+import { useDismissBootShell } from '@/components/boot-shell';
 import { Button } from '@/components/button';
 import { Notice } from '@/components/notice';
 import { colors, space } from '@/components/theme';
@@ -13,6 +14,8 @@ import { AppShell } from './app-shell';
  */
 export function SignedInFrame({ children }: { children: ReactNode }) {
   const session = useSession();
+  // A signed-in person who opened /sign-in: the gate moves them here.
+  useDismissBootShell();
   if (session.data) return <AppShell me={session.data}>{children}</AppShell>;
   if (session.isError) {
     return (

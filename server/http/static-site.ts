@@ -3,9 +3,25 @@ import path from 'node:path';
 import express, { type Express } from 'express';
 import { compressedAssets } from './compressed-assets';
 
+/** Paths whose page shows the pre-rendered sign-in shell of public/index.html until the app mounts. */
+const SHELL_PATHS = new Set(['/sign-in', '/sign-in/']);
+const HIDDEN_SHELL = '<div id="boot-shell" hidden>';
+
+/** index.html as sent for a path: on the sign-in page the shell is un-hidden (the CSP forbids an inline script doing it). */
+export function pageHtml(html: string, pagePath: string): string {
+  return SHELL_PATHS.has(pagePath) ? html.replace(HIDDEN_SHELL, '<div id="boot-shell">') : html;
+}
+
+/** Whether a file of dist/ (path relative to it) has a name that never changes content: cached for a year. */
+export function isImmutableAsset(relativePath: string): boolean {
+  // _expo/static and assets/ names carry the build's content hash; public/fonts/ names carry one by hand (public/fonts/README.md).
+  const top = relativePath.split(/[\\/]/)[0];
+  return top === '_expo' || top === 'assets' || top === 'fonts';
+}
+
 /**
  * Serves the exported web app from dist/ with a single-page fallback.
- * Hashed bundles are cached for a year; index.html is always revalidated.
+ * Hashed bundles and fonts are cached for a year; index.html is always revalidated.
  * The fallback never answers /api paths (those get JSON 404s).
  */
 export function mountStaticSite(app: Express, distDir: string) {
@@ -16,7 +32,7 @@ export function mountStaticSite(app: Express, distDir: string) {
     express.static(distDir, {
       index: false,
       setHeaders(res, file) {
-        if (file.includes(`${path.sep}_expo${path.sep}static${path.sep}`) || file.includes(`${path.sep}assets${path.sep}`)) {
+        if (isImmutableAsset(path.relative(distDir, file))) {
           res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
         }
       },
@@ -24,11 +40,13 @@ export function mountStaticSite(app: Express, distDir: string) {
   );
   app.get('/{*splat}', (req, res, next) => {
     if (req.path === '/api' || req.path.startsWith('/api/')) return next();
-    if (!fs.existsSync(indexFile)) {
-      res.status(503).type('text/plain').send('The web app has not been built yet. Run `npm start`, which builds it.');
-      return;
-    }
-    res.setHeader('Cache-Control', 'no-cache');
-    res.sendFile(indexFile);
+    fs.readFile(indexFile, 'utf8', (err, html) => {
+      if (err) {
+        res.status(503).type('text/plain').send('The web app has not been built yet. Run `npm start`, which builds it.');
+        return;
+      }
+      res.setHeader('Cache-Control', 'no-cache');
+      res.type('html').send(pageHtml(html, req.path));
+    });
   });
 }

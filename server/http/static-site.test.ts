@@ -1,0 +1,67 @@
+/// <reference types="node" />
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import express from 'express';
+import request from 'supertest';
+import { afterAll, describe, expect, it } from 'vitest';
+import { isImmutableAsset, mountStaticSite, pageHtml } from './static-site';
+
+const HTML = '<!doctype html><body><div id="boot-shell" hidden><h1>Baywalk</h1></div><div id="root"></div></body>';
+
+describe('static site', () => {
+  const dist = fs.mkdtempSync(path.join(os.tmpdir(), 'baywalk-site-'));
+  fs.mkdirSync(path.join(dist, 'fonts'));
+  fs.writeFileSync(path.join(dist, 'fonts/nunito-sans-400.abcd1234.woff2'), 'woff2');
+  fs.writeFileSync(path.join(dist, 'favicon.ico'), 'icon');
+  fs.writeFileSync(path.join(dist, 'index.html'), HTML);
+  const app = express();
+  mountStaticSite(app, dist);
+  afterAll(() => fs.rmSync(dist, { recursive: true, force: true }));
+
+  it('shows the pre-rendered sign-in shell on /sign-in only', async () => {
+    const signIn = await request(app).get('/sign-in');
+    expect(signIn.status).toBe(200);
+    expect(signIn.headers['content-type']).toMatch(/text\/html/);
+    expect(signIn.headers['cache-control']).toBe('no-cache');
+    expect(signIn.text).toContain('<div id="boot-shell"><h1>');
+    for (const url of ['/', '/walks/123', '/g/some-token', '/sign-up', '/sign-in-help']) {
+      const other = await request(app).get(url);
+      expect(other.status, url).toBe(200);
+      expect(other.text, url).toBe(HTML);
+    }
+  });
+
+  it('keeps the page as built when it has no shell', () => {
+    expect(pageHtml('<div id="root"></div>', '/sign-in')).toBe('<div id="root"></div>');
+  });
+
+  it('caches hashed folders for a year and other files not at all', async () => {
+    const font = await request(app).get('/fonts/nunito-sans-400.abcd1234.woff2');
+    expect(font.status).toBe(200);
+    expect(font.headers['cache-control']).toBe('public, max-age=31536000, immutable');
+    const icon = await request(app).get('/favicon.ico');
+    expect(icon.headers['cache-control']).not.toMatch(/immutable/);
+    expect(isImmutableAsset(path.join('_expo', 'static', 'js', 'web', 'entry-1.js'))).toBe(true);
+    expect(isImmutableAsset(path.join('assets', 'node_modules', 'x.png'))).toBe(true);
+    expect(isImmutableAsset('index.html')).toBe(false);
+    expect(isImmutableAsset(path.join('walks', 'assets', 'x.js'))).toBe(false);
+  });
+
+  it('answers 503 with a hint when the app is not built, and leaves /api alone', async () => {
+    const empty = fs.mkdtempSync(path.join(os.tmpdir(), 'baywalk-empty-'));
+    const bare = express();
+    mountStaticSite(bare, empty);
+    bare.use((_req, res) => res.status(404).json({ error: { code: 'not_found' } }));
+    try {
+      const page = await request(bare).get('/sign-in');
+      expect(page.status).toBe(503);
+      expect(page.text).toMatch(/npm start/);
+      const api = await request(bare).get('/api/nothing');
+      expect(api.status).toBe(404);
+      expect(api.body.error.code).toBe('not_found');
+    } finally {
+      fs.rmSync(empty, { recursive: true, force: true });
+    }
+  });
+});
