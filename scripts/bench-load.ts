@@ -20,6 +20,9 @@ const WALKS = Number(process.env.BENCH_WALKS ?? 10000);
 /** The paced runs' offered load, across all connections: about a third of the step append's saturated throughput here, so latency is mostly service time, not queueing. */
 const RATE = Number(process.env.BENCH_RATE ?? 100);
 const TARGETS = { step: 5, tree: 2 };
+/** BENCH_ONLY=tree or =step measures just that one (with its bare yardstick); BENCH_PROFILE=1 writes the server's CPU profile to test-artifacts/. */
+const ONLY = process.env.BENCH_ONLY;
+const PROFILE_DIR = process.env.BENCH_PROFILE === '1' ? path.join(ROOT, 'test-artifacts', 'bench-profile') : undefined;
 
 // Lean at idle, normal at 2 500 rpm, low vacuum, a hose found off: one walk, four answers, a cause.
 const LEAN_PATH = [
@@ -89,7 +92,7 @@ async function main() {
     BAYWALK_LOG_LEVEL: 'warn',
     BAYWALK_SMTP_HOST: '127.0.0.1',
     BAYWALK_SMTP_PORT: '9',
-  });
+  }, PROFILE_DIR ? ['--cpu-prof', `--cpu-prof-dir=${PROFILE_DIR}`] : []);
   const bare = await spawnServer('scripts/bench-bare-server.ts', barePort, '/bare', {});
   try {
     const base = `http://127.0.0.1:${appPort}`;
@@ -109,35 +112,43 @@ async function main() {
       },
     }));
     const sampleStep = JSON.stringify({ stepId: crypto.randomUUID(), event: LEAN_PATH[0] });
-    const runs = async (rate?: number) => ({
-      bareGet: await measure('bare Express GET', { url: `http://127.0.0.1:${barePort}/bare`, headers: browser }, rate),
-      tree: await measure(`GET /api/trees/${treeId}`, { url: `${base}/api/trees/${treeId}`, headers: { ...browser, cookie } }, rate),
-      barePost: await measure('bare Express POST (JSON)', { url: `http://127.0.0.1:${barePort}/bare`, method: 'POST', headers: { ...browser, 'content-type': 'application/json' }, body: sampleStep }, rate),
-      step: await measure('POST /api/walks/:id/steps', { url: base, requests: stepRequests }, rate),
-    });
+    // Each of ours beside its yardstick, measured one after the other in the same run.
+    const pairs = [
+      { key: 'tree', label: 'tree fetch ', target: TARGETS.tree, bare: { name: 'bare Express GET', opts: { url: `http://127.0.0.1:${barePort}/bare`, headers: browser } }, ours: { name: `GET /api/trees/${treeId}`, opts: { url: `${base}/api/trees/${treeId}`, headers: { ...browser, cookie } } } },
+      { key: 'step', label: 'step append', target: TARGETS.step, bare: { name: 'bare Express POST (JSON)', opts: { url: `http://127.0.0.1:${barePort}/bare`, method: 'POST' as const, headers: { ...browser, 'content-type': 'application/json' }, body: sampleStep } }, ours: { name: 'POST /api/walks/:id/steps', opts: { url: base, requests: stepRequests } } },
+    ].filter((pair) => !ONLY || pair.key === ONLY);
+    const runs = async (rate?: number) => {
+      const figuresOf: Record<string, { bare: Figures; ours: Figures; ratio: number }> = {};
+      for (const pair of pairs) {
+        const bareFigures = await measure(pair.bare.name, pair.bare.opts, rate);
+        const ours = await measure(pair.ours.name, pair.ours.opts as Parameters<typeof autocannon>[0], rate);
+        figuresOf[pair.key] = { bare: bareFigures, ours, ratio: ours.p99 / Math.max(1, bareFigures.p99) };
+      }
+      return figuresOf;
+    };
 
     say(`saturated: ${CONNECTIONS} connections as fast as they go, ${SECONDS} s per run after a 2 s warm-up`);
     const saturated = await runs();
-    say(`paced: ${CONNECTIONS} connections sharing ${RATE} requests/s (latency without queueing), ${SECONDS} s per run`);
+    say(`paced: ${CONNECTIONS} connections sharing ${RATE} requests/s (autocannon sends them in bursts), ${SECONDS} s per run`);
     const paced = await runs(RATE);
     if (next > walkIds.length) say(`warning: ran out of fresh walks (${next} taken of ${walkIds.length}); raise BENCH_WALKS`);
 
-    const ratio = (r: Awaited<ReturnType<typeof runs>>) => ({ step: r.step.p99 / Math.max(1, r.barePost.p99), tree: r.tree.p99 / Math.max(1, r.bareGet.p99) });
-    const ratios = { saturated: ratio(saturated), paced: ratio(paced) };
-    for (const mode of ['saturated', 'paced'] as const) {
-      const r = ratios[mode];
-      say(`${mode.padEnd(9)} step append p99 ${r.step.toFixed(1)}x bare POST (target ≤ ${TARGETS.step}x): ${r.step <= TARGETS.step ? 'met' : 'NOT met'}`);
-      say(`${mode.padEnd(9)} tree fetch  p99 ${r.tree.toFixed(1)}x bare GET  (target ≤ ${TARGETS.tree}x): ${r.tree <= TARGETS.tree ? 'met' : 'NOT met'}`);
+    for (const [mode, result] of [['saturated', saturated], ['paced', paced]] as const) {
+      for (const pair of pairs) {
+        const r = result[pair.key].ratio;
+        say(`${mode.padEnd(9)} ${pair.label} p99 ${r.toFixed(1)}x ${pair.bare.name.replace('bare Express ', 'bare ')} (target ≤ ${pair.target}x): ${r <= pair.target ? 'met' : 'NOT met'}`);
+      }
     }
     const out = path.join(ROOT, 'test-artifacts', 'bench-load.json');
     fs.mkdirSync(path.dirname(out), { recursive: true });
-    fs.writeFileSync(out, JSON.stringify({ at: new Date().toISOString(), connections: CONNECTIONS, seconds: SECONDS, rate: RATE, saturated, paced, ratios }, null, 2));
-    say(`figures written to ${path.relative(ROOT, out)}`);
-    if ([saturated, paced].some((r) => r.tree.failed + r.step.failed > 0)) {
+    fs.writeFileSync(out, JSON.stringify({ at: new Date().toISOString(), connections: CONNECTIONS, seconds: SECONDS, rate: RATE, saturated, paced }, null, 2));
+    say(`figures written to ${path.relative(ROOT, out)}${PROFILE_DIR ? `; the server's CPU profile goes to ${path.relative(ROOT, PROFILE_DIR)} when it stops` : ''}`);
+    if ([saturated, paced].some((r) => Object.values(r).some((f) => f.ours.failed > 0))) {
       say('some requests failed: the figures above do not measure what they claim');
       process.exitCode = 1;
     }
   } finally {
+    // The server stops cleanly on SIGTERM, which is also when a profiled one writes its profile.
     app.kill('SIGTERM');
     bare.kill('SIGTERM');
   }

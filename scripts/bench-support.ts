@@ -32,9 +32,9 @@ export function freePort(): Promise<number> {
 }
 
 /** Starts a TypeScript entry point as its own node process and waits for an HTTP answer at `probe`. */
-export async function spawnServer(entry: string, port: number, probe: string, env: Record<string, string>): Promise<ChildProcess> {
+export async function spawnServer(entry: string, port: number, probe: string, env: Record<string, string>, nodeArgs: string[] = []): Promise<ChildProcess> {
   let out = '';
-  const proc = spawn(process.execPath, ['--import', 'tsx', entry], { cwd: ROOT, env: { ...process.env, ...env, PORT: String(port) }, stdio: ['ignore', 'pipe', 'pipe'] });
+  const proc = spawn(process.execPath, [...nodeArgs, '--import', 'tsx', entry], { cwd: ROOT, env: { ...process.env, ...env, PORT: String(port) }, stdio: ['ignore', 'pipe', 'pipe'] });
   proc.stdout!.on('data', (d) => (out += d));
   proc.stderr!.on('data', (d) => (out += d));
   for (let i = 0; i < 600; i++) {

@@ -46,17 +46,25 @@ export function createApp(deps: AppDeps) {
       strictTransportSecurity: config.secureCookies,
     }),
   );
-  app.use(
-    pinoHttp({
-      logger,
-      autoLogging: { ignore: (req) => !req.url?.startsWith('/api') },
-      // One short line per request: no headers, so no cookies in the log.
-      serializers: {
-        req: (req: { id: unknown; method: string; url: string }) => ({ id: req.id, method: req.method, url: req.url }),
-        res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
-      },
-    }),
-  );
+  if (logger.isLevelEnabled('info')) {
+    app.use(
+      pinoHttp({
+        logger,
+        autoLogging: { ignore: (req) => !req.url?.startsWith('/api') },
+        // One short line per request: no headers, so no cookies in the log.
+        serializers: {
+          req: (req: { id: unknown; method: string; url: string }) => ({ id: req.id, method: req.method, url: req.url }),
+          res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
+        },
+      }),
+    );
+  } else {
+    // Request lines would not be written at this level: skip pino-http's per-request work, keep req.log for errors.
+    app.use((req, _res, next) => {
+      req.log = logger;
+      next();
+    });
+  }
 
   const passport = createPassport(knex);
   const api = express.Router();

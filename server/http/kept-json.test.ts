@@ -38,6 +38,7 @@ describe('sendKeptJson', () => {
     const br = await fetchRaw(a, '/page', 'gzip, deflate, br, zstd');
     expect(br.headers['content-encoding']).toBe('br');
     expect(br.headers.vary).toMatch(/Accept-Encoding/);
+    expect(br.headers['cache-control']).toBe('private, no-cache');
     expect(JSON.parse(zlib.brotliDecompressSync(br.body).toString())).toEqual(page);
     expect(br.body.length).toBeLessThan(JSON.stringify(page).length / 5);
 

@@ -50,7 +50,8 @@ function compressedCopies({ body, etag }: Kept) {
  */
 export function sendKeptJson(req: Request, res: Response, answer: object) {
   const kept = keptBody(answer);
-  res.type('json').set('ETag', kept.etag).vary('Accept-Encoding');
+  // A signed-in person's answer: their browser may keep it but must ask again each time; shared caches never keep it.
+  res.type('json').set('ETag', kept.etag).set('Cache-Control', 'private, no-cache').vary('Accept-Encoding');
   if (req.fresh) {
     res.status(304).end();
     return;
