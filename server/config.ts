@@ -66,6 +66,8 @@ function rateLimits(env: NodeJS.ProcessEnv) {
     resetWindowMs: 60 * 60_000,
     resetPerIp: n('BAYWALK_RESET_LIMIT_IP', 10),
     resetPerAccount: n('BAYWALK_RESET_LIMIT_ACCOUNT', 3),
+    signUpWindowMs: 60 * 60_000,
+    signUpPerIp: n('BAYWALK_SIGNUP_LIMIT_IP', 10),
   };
 }
 

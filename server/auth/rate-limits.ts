@@ -35,12 +35,15 @@ function limiter(knex: Knex, opts: { prefix: string; windowMs: number; limit: nu
 
 /**
  * Rate limits for sign-in (failed attempts only) and password-reset requests,
- * per IP address and per account, counted in MariaDB. Limits come from
+ * per IP address and per account, and for new shops per IP address (each
+ * sign-up hashes a password and writes a shop with its tree library),
+ * counted in MariaDB. Limits come from
  * config.rateLimits (see the README's configuration table).
  */
 export function createAuthLimiters(knex: Knex, limits: Config['rateLimits']) {
   const signInMessage = (m: number) => `Too many sign-in attempts. Wait ${m} minute${m === 1 ? '' : 's'} and try again, or reset your password.`;
   const resetMessage = (m: number) => `Too many password reset requests. Wait ${m} minute${m === 1 ? '' : 's'} and try again.`;
+  const signUpMessage = (m: number) => `Too many new shops from this network. Wait ${m} minute${m === 1 ? '' : 's'} and try again, or ask the shop's owner to invite you.`;
   return {
     signIn: [
       limiter(knex, { prefix: 'signin-ip:', windowMs: limits.signInWindowMs, limit: limits.signInPerIp, byAccount: false, onlyFailures: true, message: signInMessage }),
@@ -50,5 +53,7 @@ export function createAuthLimiters(knex: Knex, limits: Config['rateLimits']) {
       limiter(knex, { prefix: 'reset-ip:', windowMs: limits.resetWindowMs, limit: limits.resetPerIp, byAccount: false, onlyFailures: false, message: resetMessage }),
       limiter(knex, { prefix: 'reset-account:', windowMs: limits.resetWindowMs, limit: limits.resetPerAccount, byAccount: true, onlyFailures: false, message: resetMessage }),
     ],
+    // Refused attempts (a taken address, a weak password) count too: only the address is known before the work.
+    signUp: [limiter(knex, { prefix: 'signup-ip:', windowMs: limits.signUpWindowMs, limit: limits.signUpPerIp, byAccount: false, onlyFailures: false, message: signUpMessage })],
   };
 }

@@ -23,6 +23,7 @@ export const authRoutes = (s: Services, passport: PassportStatic): RouteDef[] =>
     method: 'post',
     path: '/auth/sign-up',
     allow: 'public',
+    before: s.limiters.signUp,
     body: signUpSchema,
     status: 201,
     handler: async ({ req, body }) => {

@@ -8,7 +8,7 @@ import { startTestMailCatcher } from '../support/mail-catcher';
 // Low limits for this file only. Each test uses its own documentation-range
 // IP (X-Forwarded-For is trusted from loopback) and its own accounts, so the
 // counters, kept in MariaDB, never mix with other suites.
-const limits = { ...loadConfig().rateLimits, signInPerIp: 6, signInPerAccount: 3, resetPerIp: 4, resetPerAccount: 2 };
+const limits = { ...loadConfig().rateLimits, signInPerIp: 6, signInPerAccount: 3, resetPerIp: 4, resetPerAccount: 2, signUpPerIp: 3 };
 const ip = () => `203.0.113.${crypto.randomInt(1, 255)}`;
 const t = createTestApp({ rateLimits: limits });
 afterAll(() => t.close());
@@ -48,6 +48,23 @@ describe('sign-in rate limits', () => {
       const res = await agent(t.app).post('/api/auth/sign-in').set('X-Forwarded-For', from).send({ email: shop.people.owner.email, password: TEST_PASSWORD });
       expect(res.status).toBe(200);
     }
+  });
+});
+
+describe('sign-up rate limit', () => {
+  it('per IP: a fourth new shop from one address within the hour waits, with a clear 429; another address is not affected', async () => {
+    const from = ip();
+    const signUp = (addr: string) =>
+      agent(t.app).post('/api/auth/sign-up').set('X-Forwarded-For', addr).send({ shopName: 'Limit Garage', name: 'Ada Quill', email: `owner-${crypto.randomUUID()}@x.example`, password: TEST_PASSWORD });
+    for (let i = 0; i < 3; i++) expect((await signUp(from)).status).toBe(201);
+    const before = Number((await t.knex('shops').count({ n: '*' }).first())!.n);
+    const blocked = await signUp(from);
+    expect(blocked.status).toBe(429);
+    expect(blocked.body.error.code).toBe('rate_limited');
+    expect(blocked.body.error.message).toMatch(/Too many new shops from this network\. Wait \d+ minutes? and try again/);
+    expect(Number((await t.knex('shops').count({ n: '*' }).first())!.n)).toBe(before);
+    const neighbour = from.replace(/\d+$/, (d) => String((Number(d) % 254) + 1));
+    expect((await signUp(neighbour)).status).toBe(201);
   });
 });
 
