@@ -123,12 +123,6 @@ export function createGuestLinkRepository(knex: Knex) {
       await trx('walks').where({ shop_id: shopId, id: walkId }).update({ job_id: jobId });
     },
 
-    /** How many photos a walk holds (guest walks have a cap). */
-    async photoCount(walkId: number): Promise<number> {
-      const [{ n }] = await knex('walk_photos').where({ walk_id: walkId }).count<{ n: number }[]>({ n: '*' });
-      return Number(n);
-    },
-
     /** Whether a photo belongs to a walk (guests may only see their own). */
     async walkHasPhoto(shopId: number, walkId: number, photoId: string): Promise<boolean> {
       return !!(await knex('walk_photos').where({ shop_id: shopId, walk_id: walkId, photo_id: photoId }).first('photo_id'));

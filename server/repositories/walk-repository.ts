@@ -107,6 +107,12 @@ export function createWalkRepository(knex: Knex) {
       return Number(n);
     },
 
+    /** How many photos a walk has. */
+    async photoCount(db: Knex, walkId: number): Promise<number> {
+      const [{ n }] = await db('walk_photos').where({ walk_id: walkId }).count<{ n: number }[]>({ n: '*' });
+      return Number(n);
+    },
+
     async insertStep(trx: Knex, row: Omit<WalkStepRow, 'created_at' | 'user_name'>): Promise<void> {
       await trx('walk_steps').insert({
         ...row,

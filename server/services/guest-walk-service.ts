@@ -62,6 +62,10 @@ export function createGuestWalkService(knex: Knex, deps: { walks: WalkService; p
     return checkOpen(l);
   }
 
+  // Checked inside the walk's locked transaction, so two requests at once cannot both take the last place.
+  const stepCap = { max: GUEST_CAPS.maxSteps, refusal: guestErrors.stepCap };
+  const photoCap = { max: GUEST_CAPS.maxPhotos, refusal: guestErrors.photoCap };
+
   async function walkOf(linkId: number): Promise<{ link: GuestLinkWithShop; walkId: number; actor: { id: null; shopId: number } }> {
     const link = await openLink(linkId);
     if (!link.walk_id) throw guestErrors.notStarted();
@@ -122,14 +126,12 @@ export function createGuestWalkService(knex: Knex, deps: { walks: WalkService; p
 
     async step(linkId: number, input: { stepId: string; event: WalkEvent; note: string | null }): Promise<WalkStepAnswer> {
       const { walkId, actor } = await walkOf(linkId);
-      if ((await walkRows.recordCount(knex, walkId)) >= GUEST_CAPS.maxSteps) throw guestErrors.stepCap();
-      return deps.walks.step(actor, walkId, input);
+      return deps.walks.step(actor, walkId, input, stepCap);
     },
 
     async undo(linkId: number, input: { stepId: string }): Promise<WalkStepAnswer> {
       const { walkId, actor } = await walkOf(linkId);
-      if ((await walkRows.recordCount(knex, walkId)) >= GUEST_CAPS.maxSteps) throw guestErrors.stepCap();
-      return deps.walks.undo(actor, walkId, input);
+      return deps.walks.undo(actor, walkId, input, stepCap);
     },
 
     async finish(linkId: number, input: { outcome: WalkFinish['outcome']; causeText: string | null; note: string | null }): Promise<GuestWalkState> {
@@ -140,8 +142,9 @@ export function createGuestWalkService(knex: Knex, deps: { walks: WalkService; p
 
     async addPhoto(linkId: number, bytes: Buffer, fields: { step: string; caption?: string }): Promise<WalkPhoto> {
       const { walkId, actor } = await walkOf(linkId);
-      if ((await links.photoCount(walkId)) >= GUEST_CAPS.maxPhotos) throw guestErrors.photoCap();
-      const photo = await deps.walks.addPhoto(actor, walkId, bytes, fields);
+      // Refused early when already full (no image work), and again inside the walk's lock for the last place.
+      if ((await walkRows.photoCount(knex, walkId)) >= GUEST_CAPS.maxPhotos) throw guestErrors.photoCap();
+      const photo = await deps.walks.addPhoto(actor, walkId, bytes, fields, photoCap);
       const base = guestLinkPath(linkId);
       return { ...photo, url: `${base}/photos/${photo.id}`, thumbUrl: `${base}/photos/${photo.id}/thumb` };
     },

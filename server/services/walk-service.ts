@@ -18,6 +18,12 @@ export interface Actor {
   name?: string | null;
 }
 
+/** A ceiling on a walk's step records (guest walks), checked inside the step's locked transaction. */
+export interface RecordCap {
+  max: number;
+  refusal: () => Error;
+}
+
 const finishedRefusal = () => conflict('This walk is finished, so it can no longer change. Start a new walk to look again.');
 
 // Published versions never change, so their parsed documents can be kept (bounded).
@@ -171,7 +177,7 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
      * answer if this step id was already recorded, replay the pinned tree, and
      * append the step only if the tree accepts the event.
      */
-    async step(actor: Actor, walkId: number, input: { stepId: string; event: WalkEvent; note: string | null }): Promise<WalkStepAnswer> {
+    async step(actor: Actor, walkId: number, input: { stepId: string; event: WalkEvent; note: string | null }, cap?: RecordCap): Promise<WalkStepAnswer> {
       // Five round trips: lock, read the steps, insert, update, commit. The answer is built from what is known.
       return knex.transaction(async (trx) => {
         const w = await findOpenLocked(trx, actor, walkId);
@@ -179,6 +185,7 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
         const seen = earlier(steps, input.stepId, 'event');
         if (seen) return retried(trx, actor, w, steps, seen);
         if (w.status !== 'open') throw finishedRefusal();
+        if (cap && steps.length >= cap.max) throw cap.refusal();
         const doc = await pinnedDoc(actor.shopId, w, trx);
         const events = liveEvents(steps);
         // One replay: the engine returns the path, whose last two steps are where the answer was given and where it leads.
@@ -218,13 +225,14 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
     },
 
     /** Takes back the latest answer still in force, as a record of its own. */
-    async undo(actor: Actor, walkId: number, input: { stepId: string }): Promise<WalkStepAnswer> {
+    async undo(actor: Actor, walkId: number, input: { stepId: string }, cap?: RecordCap): Promise<WalkStepAnswer> {
       return knex.transaction(async (trx) => {
         const w = await findOpenLocked(trx, actor, walkId);
         const steps = await walks.steps(w.id, trx);
         const seen = earlier(steps, input.stepId, 'undo');
         if (seen) return retried(trx, actor, w, steps, seen);
         if (w.status !== 'open') throw finishedRefusal();
+        if (cap && steps.length >= cap.max) throw cap.refusal();
         const doc = await pinnedDoc(actor.shopId, w, trx);
         const { live } = effectiveSteps(steps);
         const last = live.at(-1);
@@ -286,7 +294,7 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
     },
 
     /** Adds a photo at a step of an open walk; refused photos leave nothing behind. */
-    async addPhoto(actor: Actor, walkId: number, bytes: Buffer, fields: { step: string; caption?: string }): Promise<WalkPhoto> {
+    async addPhoto(actor: Actor, walkId: number, bytes: Buffer, fields: { step: string; caption?: string }, cap?: RecordCap): Promise<WalkPhoto> {
       const w = await walks.find(actor.shopId, walkId);
       if (!w) throw notFound('That walk');
       if (w.status !== 'open') throw finishedRefusal();
@@ -295,6 +303,7 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
       const saved = await photos.save(actor.shopId, actor.id, bytes, async (trx, photoId) => {
         const locked = await findOpenLocked(trx, actor, walkId);
         if (locked.status !== 'open') throw finishedRefusal();
+        if (cap && (await walks.photoCount(trx, walkId)) >= cap.max) throw cap.refusal();
         const atSeq = await walks.recordCount(trx, walkId);
         await walks.linkPhoto(trx, { photo_id: photoId, walk_id: walkId, shop_id: actor.shopId, step_id: fields.step, at_seq: atSeq, caption: fields.caption || null });
       });

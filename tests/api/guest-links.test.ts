@@ -288,6 +288,11 @@ describe('guest links', () => {
     const up = await g.post(`${base}/photos`).field('step', 'trim-idle').attach('photo', await photo(), 'one-more.jpg');
     expect(up.status).toBe(429);
     expect(up.body.error.message).toMatch(/already has 12 photos/);
+    // One place left and two uploads at once: the cap is checked again under the walk's lock, so one of them gets it.
+    await t.knex('walk_photos').where({ walk_id: walkId, photo_id: ids[0] }).delete();
+    const both = await Promise.all([1, 2].map(async (n) => g.post(`${base}/photos`).field('step', 'trim-idle').attach('photo', await photo(), `race-${n}.jpg`)));
+    expect(both.map((r) => r.status).sort()).toEqual([201, 429]);
+    expect(Number((await t.knex('walk_photos').where({ walk_id: walkId }).count({ n: '*' }).first())!.n)).toBe(12);
     // Guest photos have a tighter size cap than staff photos (6 MB against 10 MB).
     const big = await g.post(`${base}/photos`).field('step', 'trim-idle').attach('photo', Buffer.alloc(7 * 1024 * 1024, 0xff), 'big.jpg');
     expect(big.status).toBe(413);
