@@ -40,4 +40,16 @@ config.resolver.resolveRequest = (context, moduleName, platform) => {
   return resolve(context, moduleName, platform);
 };
 
+// Inline requires: an imported module runs when its export is first used, not
+// when its importer loads. The first screen then skips most of expo-router's
+// navigators and every screen's modules it never touches (about a third of the
+// JavaScript the sign-in page used to run). Warning: a module whose import has
+// side effects the importer relies on must be imported bare (`import 'x'`),
+// which is never inlined.
+const upstreamTransformOptions = config.transformer.getTransformOptions;
+config.transformer.getTransformOptions = async (...args) => {
+  const base = upstreamTransformOptions ? await upstreamTransformOptions(...args) : {};
+  return { ...base, transform: { ...(base.transform ?? {}), inlineRequires: true } };
+};
+
 module.exports = config;
