@@ -1,4 +1,4 @@
-import type { ReactNode } from 'react';
+import { useDeferredValue, type ReactNode } from 'react';
 import { ActivityIndicator, StyleSheet, View } from 'react-native';
 import { useSession } from '@/hooks/use-session';
 import { useDismissBootShell } from '@/components/boot-shell';
@@ -16,7 +16,10 @@ export function SignedInFrame({ children }: { children: ReactNode }) {
   const session = useSession();
   // A signed-in person who opened /sign-in: the gate moves them here.
   useDismissBootShell();
-  if (session.data) return <AppShell me={session.data}>{children}</AppShell>;
+  // The shell and the first screen are rendered as a deferred update once the
+  // person is known, in slices rather than as one long task (see walk-screen.tsx).
+  const shellReady = useDeferredValue(!!session.data);
+  if (session.data && shellReady) return <AppShell me={session.data}>{children}</AppShell>;
   if (session.isError) {
     return (
       <View style={styles.center} testID="session-error">

@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useDeferredValue, useState } from 'react';
 import { ActivityIndicator, StyleSheet, Text, View } from 'react-native';
 import { router } from 'expo-router';
 import { availableAnswers } from '@/trees/engine';
@@ -23,8 +23,12 @@ import { useStepSender } from './use-step-sender';
 export function WalkScreen({ source }: { source: WalkSource }) {
   const sender = useStepSender(source);
   const [showHistory, setShowHistory] = useState(false);
+  // The walk's first render is large (cautions, markdown, answers): when its
+  // data lands, React renders it as a deferred update, in slices, instead of
+  // one long task that blocks the page. Later updates render at once.
+  const firstRenderDone = useDeferredValue(source.data !== undefined);
 
-  if (source.isLoading) {
+  if (source.isLoading || (source.data && !firstRenderDone)) {
     return (
       <Screen testID="walk-loading">
         <ActivityIndicator color={colors.accent} />
