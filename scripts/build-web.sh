@@ -6,6 +6,16 @@ cd "$ROOT"
 TMP="dist.tmp.$$"
 trap 'rm -rf "$TMP"' EXIT
 CI=1 EXPO_OFFLINE=1 EXPO_NO_TELEMETRY=1 npx expo export --platform web --output-dir "$TMP"
+# Every page loads every layout chunk (Expo Router's async routes fetch them
+# only once the entry has run): preload them with the page instead.
+PRELOADS=""
+for f in "$TMP"/_expo/static/js/web/_layout-*.js; do
+  [ -e "$f" ] && PRELOADS="$PRELOADS<link rel=\"preload\" href=\"/_expo/static/js/web/$(basename "$f")\" as=\"script\">"
+done
+if [ -n "$PRELOADS" ]; then
+  grep -q '</head>' "$TMP/index.html" || die "the exported index.html has no </head>"
+  PRELOADS="$PRELOADS" node -e 'const fs=require("fs");const f=process.argv[1];fs.writeFileSync(f,fs.readFileSync(f,"utf8").replace("</head>",process.env.PRELOADS+"</head>"))' "$TMP/index.html"
+fi
 # Swap in one step so a server never serves a half-written build.
 OLD="dist.old.$$"
 [ -d dist ] && mv dist "$OLD"
