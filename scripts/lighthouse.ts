@@ -85,6 +85,9 @@ async function main() {
       const res = await lighthouse(p.url, { port: chrome.port, output: 'json', logLevel: 'error', onlyCategories: ['performance', 'accessibility'], extraHeaders: p.headers });
       if (!res) throw new Error(`Lighthouse returned nothing for ${p.url}`);
       const lhr = res.lhr;
+      // The full report, for reading what costs the most (largest requests, long tasks, shifts).
+      fs.mkdirSync(path.join(ROOT, 'test-artifacts'), { recursive: true });
+      fs.writeFileSync(path.join(ROOT, 'test-artifacts', `lighthouse-${p.name.replace(/\W+/g, '-')}.json`), JSON.stringify(lhr));
       if (lhr.runtimeError) throw new Error(`${p.name}: ${lhr.runtimeError.message}`);
       const score = (k: string) => Math.round((lhr.categories[k].score ?? 0) * 100);
       const num = (k: string) => Math.round(lhr.audits[k]?.numericValue ?? NaN);
