@@ -16,6 +16,9 @@ if [ -n "$PRELOADS" ]; then
   grep -q '</head>' "$TMP/index.html" || die "the exported index.html has no </head>"
   PRELOADS="$PRELOADS" node -e 'const fs=require("fs");const f=process.argv[1];fs.writeFileSync(f,fs.readFileSync(f,"utf8").replace("</head>",process.env.PRELOADS+"</head>"))' "$TMP/index.html"
 fi
+# Brotli at its best quality is too slow for a request but fine once per build.
+node --import tsx -e 'require("./server/http/compressed-assets.ts").precompress(process.argv[1]).then((n) => console.log(`precompressed ${n} files`))' "$TMP" \
+  || die "could not precompress the web build"
 # Swap in one step so a server never serves a half-written build.
 OLD="dist.old.$$"
 [ -d dist ] && mv dist "$OLD"

@@ -7,6 +7,7 @@ import zlib from 'node:zlib';
 import express from 'express';
 import request from 'supertest';
 import { afterAll, describe, expect, it } from 'vitest';
+import { precompress } from './compressed-assets';
 import { mountStaticSite } from './static-site';
 
 describe('compressed hashed assets', () => {
@@ -61,5 +62,30 @@ describe('compressed hashed assets', () => {
     }
     const index = await request(app).get('/jobs').set('Accept-Encoding', 'br');
     expect(index.headers['cache-control']).toBe('no-cache');
+  });
+
+  it('sends the copies the build compressed ahead, as they are', async () => {
+    const built = fs.mkdtempSync(path.join(os.tmpdir(), 'baywalk-built-'));
+    try {
+      const dir = path.join(built, '_expo/static/js/web');
+      fs.mkdirSync(dir, { recursive: true });
+      fs.writeFileSync(path.join(dir, 'entry-def456.js'), js);
+      fs.writeFileSync(path.join(dir, 'tiny-1.js'), 'x');
+      fs.writeFileSync(path.join(built, 'index.html'), '<!doctype html>');
+      expect(await precompress(built)).toBe(1);
+      expect(fs.existsSync(path.join(dir, 'tiny-1.js.br'))).toBe(false);
+      expect(zlib.brotliDecompressSync(fs.readFileSync(path.join(dir, 'entry-def456.js.br'))).toString()).toBe(js);
+      // A marker in the stored copy proves it is sent rather than compressed again.
+      const marked = 'console.log("stored copy");';
+      fs.writeFileSync(path.join(dir, 'entry-def456.js.br'), zlib.brotliCompressSync(marked));
+      fs.writeFileSync(path.join(dir, 'entry-def456.js.gz'), zlib.gzipSync(marked));
+      const site = express();
+      mountStaticSite(site, built);
+      const gz = await request(site).get('/_expo/static/js/web/entry-def456.js').set('Accept-Encoding', 'gzip');
+      expect(gz.headers['content-encoding']).toBe('gzip');
+      expect(gz.text).toBe(marked);
+    } finally {
+      fs.rmSync(built, { recursive: true, force: true });
+    }
   });
 });
