@@ -1,0 +1,77 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Browser, Page } from 'playwright-core';
+import { DESKTOP, PHONE, launchBrowser, screenshot, watchConsole } from '../support/browser';
+import { startTestServer } from '../support/test-app';
+
+// What the pre-rendered sign-in page of public/index.html draws, and the
+// real screen's element for each (components/auth/auth-frame.tsx, sign-in-form.tsx).
+const PARTS: Array<[shell: string, app: string]> = [
+  ['.bs-title', 'h1'],
+  ['.bs-tagline', 'text=Guided fault-finding'],
+  ['.bs-card', '[data-testid="sign-in-form"] >> xpath=..'],
+  ['.bs-heading', '[data-testid="sign-in-form"] h2'],
+  ['.bs-field:nth-of-type(1) .bs-input', '[data-testid="sign-in-email"]'],
+  ['.bs-field:nth-of-type(2) .bs-input', '[data-testid="sign-in-password"]'],
+  ['.bs-button', '[data-testid="sign-in-submit"]'],
+  ['.bs-links a:nth-child(1)', '[data-testid="link-forgot"]'],
+  ['.bs-links a:nth-child(2)', '[data-testid="link-sign-up"]'],
+];
+
+async function boxes(page: Page, selectors: string[]) {
+  const out = [];
+  for (const s of selectors) {
+    const box = await page.locator(s).first().boundingBox();
+    expect(box, s).not.toBeNull();
+    out.push({ x: Math.round(box!.x), y: Math.round(box!.y), width: Math.round(box!.width), height: Math.round(box!.height) });
+  }
+  return out;
+}
+
+describe('sign-in page drawn before the app loads', () => {
+  let server: Awaited<ReturnType<typeof startTestServer>>;
+  let browser: Browser;
+
+  beforeAll(async () => {
+    server = await startTestServer();
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+    await server?.close();
+  });
+
+  for (const [name, viewport] of [['phone', PHONE], ['desktop', DESKTOP]] as const) {
+    it(`matches the real sign-in screen, then gives way to it, at ${viewport.width}x${viewport.height}`, async () => {
+      // Without the app's JavaScript: only the page's own shell.
+      const bare = await browser.newPage({ viewport });
+      await bare.route('**/_expo/static/**', (route) => route.abort());
+      await bare.goto(server.url + '/sign-in');
+      await bare.locator('#boot-shell .bs-tagline').waitFor();
+      await bare.evaluate(() => document.fonts.ready);
+      const shell = await boxes(bare, PARTS.map(([s]) => `#boot-shell ${s}`));
+      await screenshot(bare, `sign-in-shell-${name}`);
+      await bare.close();
+
+      // With it: the real screen takes over, in the same places, and the shell is gone.
+      const page = await browser.newPage({ viewport });
+      const errors = watchConsole(page);
+      await page.goto(server.url + '/sign-in');
+      await page.getByTestId('sign-in-form').waitFor();
+      await page.locator('#boot-shell').waitFor({ state: 'detached' });
+      const real = await boxes(page, PARTS.map(([, a]) => a));
+      expect(real).toEqual(shell);
+      expect(errors).toEqual([]);
+      await page.close();
+    });
+  }
+
+  it('is left hidden on every other address', async () => {
+    const page = await browser.newPage({ viewport: PHONE });
+    await page.route('**/_expo/static/**', (route) => route.abort());
+    for (const path of ['/', '/walks/1', '/sign-up', '/g/some-token']) {
+      await page.goto(server.url + path);
+      expect(await page.locator('#boot-shell').isVisible(), path).toBe(false);
+    }
+    await page.close();
+  });
+});
