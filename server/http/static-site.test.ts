@@ -1,7 +1,9 @@
 /// <reference types="node" />
 import fs from 'node:fs';
+import http from 'node:http';
 import os from 'node:os';
 import path from 'node:path';
+import zlib from 'node:zlib';
 import express from 'express';
 import request from 'supertest';
 import { afterAll, describe, expect, it } from 'vitest';
@@ -30,6 +32,28 @@ describe('static site', () => {
       expect(other.status, url).toBe(200);
       expect(other.text, url).toBe(HTML);
     }
+  });
+
+  it('sends the page compressed when the browser takes it', async () => {
+    // Raw bytes over a real socket: the test client would decompress for us.
+    const server = app.listen(0, '127.0.0.1');
+    await new Promise((r) => server.once('listening', r));
+    const br = await new Promise<{ headers: http.IncomingHttpHeaders; body: Buffer }>((resolve, reject) => {
+      http
+        .get({ host: '127.0.0.1', port: (server.address() as { port: number }).port, path: '/walks/1', headers: { 'Accept-Encoding': 'gzip, deflate, br' } }, (res) => {
+          const chunks: Buffer[] = [];
+          res.on('data', (c: Buffer) => chunks.push(c));
+          res.on('end', () => resolve({ headers: res.headers, body: Buffer.concat(chunks) }));
+        })
+        .on('error', reject);
+    });
+    server.close();
+    expect(br.headers['content-encoding']).toBe('br');
+    expect(br.headers.vary).toMatch(/Accept-Encoding/);
+    expect(zlib.brotliDecompressSync(br.body).toString()).toBe(HTML);
+    const plain = await request(app).get('/walks/1').set('Accept-Encoding', 'identity');
+    expect(plain.headers['content-encoding']).toBeUndefined();
+    expect(plain.text).toBe(HTML);
   });
 
   it('keeps the page as built when it has no shell', () => {

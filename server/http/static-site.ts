@@ -1,5 +1,6 @@
 import fs from 'node:fs';
 import path from 'node:path';
+import zlib from 'node:zlib';
 import express, { type Express } from 'express';
 import { compressedAssets } from './compressed-assets';
 
@@ -46,7 +47,14 @@ export function mountStaticSite(app: Express, distDir: string) {
         return;
       }
       res.setHeader('Cache-Control', 'no-cache');
-      res.type('html').send(pageHtml(html, req.path));
+      res.setHeader('Vary', 'Accept-Encoding');
+      res.type('html');
+      // The page (about 7 KB with the shell's styles) is the first thing a phone waits for: compress it too.
+      const body = Buffer.from(pageHtml(html, req.path));
+      const encoding = req.acceptsEncodings('br') === 'br' ? 'br' : req.acceptsEncodings('gzip') === 'gzip' ? 'gzip' : undefined;
+      if (!encoding) return void res.send(body);
+      res.setHeader('Content-Encoding', encoding);
+      res.send(encoding === 'br' ? zlib.brotliCompressSync(body) : zlib.gzipSync(body));
     });
   });
 }
