@@ -2,7 +2,8 @@
 // npm run audit:lighthouse — Lighthouse 12.2.3 (mobile settings: emulated phone,
 // simulated slow 4G and CPU) in Debian's Chromium against the served production
 // build: the sign-in page signed out, and a walk step signed in. Prints the
-// performance and accessibility scores and the main bundle's size. Uses its own
+// performance and accessibility scores, the JavaScript each page loaded, and the
+// bundle sizes; each page's full report goes to test-artifacts/. Uses its own
 // database (baywalk_audit_lighthouse) with the demo shop.
 import type { ChildProcess } from 'node:child_process';
 import crypto from 'node:crypto';
@@ -45,7 +46,7 @@ function startServer(port: number): Promise<ChildProcess> {
   });
 }
 
-/** The entry bundle(s) the web build ships, raw and gzipped. */
+/** The JavaScript files the web build ships (entry, common chunk, one per route), raw, gzipped and as served (Brotli). */
 function bundleSizes() {
   const dir = path.join(ROOT, 'dist', '_expo', 'static', 'js', 'web');
   return fs
@@ -53,10 +54,13 @@ function bundleSizes() {
     .filter((f) => f.endsWith('.js'))
     .map((f) => {
       const data = fs.readFileSync(path.join(dir, f));
-      return { file: f, raw: data.length, gzip: zlib.gzipSync(data, { level: 9 }).length };
+      const br = fs.existsSync(path.join(dir, `${f}.br`)) ? fs.statSync(path.join(dir, `${f}.br`)).size : zlib.brotliCompressSync(data).length;
+      return { file: f, raw: data.length, gzip: zlib.gzipSync(data, { level: 9 }).length, brotli: br };
     })
     .sort((a, b) => b.raw - a.raw);
 }
+
+const kb = (n: number) => `${(n / 1024).toFixed(0)} KB`;
 
 async function main() {
   run('bash', ['-c', 'source scripts/env.sh && ensure_web_build']);
@@ -79,7 +83,7 @@ async function main() {
       { name: 'sign-in', url: `${base}/sign-in`, headers: undefined },
       { name: 'walk step', url: `${base}/walks/${walkId}`, headers: { Cookie: cookie } },
     ];
-    const results: Array<{ page: string; performance: number; accessibility: number; lcpMs: number; tbtMs: number; cls: number }> = [];
+    const results: Array<{ page: string; performance: number; accessibility: number; lcpMs: number; tbtMs: number; cls: number; scriptBytes: number; scripts: number }> = [];
     for (const p of pages) {
       // Default config = mobile: emulated phone screen, simulated slow 4G and 4x CPU slowdown.
       const res = await lighthouse(p.url, { port: chrome.port, output: 'json', logLevel: 'error', onlyCategories: ['performance', 'accessibility'], extraHeaders: p.headers });
@@ -91,17 +95,22 @@ async function main() {
       if (lhr.runtimeError) throw new Error(`${p.name}: ${lhr.runtimeError.message}`);
       const score = (k: string) => Math.round((lhr.categories[k].score ?? 0) * 100);
       const num = (k: string) => Math.round(lhr.audits[k]?.numericValue ?? NaN);
-      results.push({ page: p.name, performance: score('performance'), accessibility: score('accessibility'), lcpMs: num('largest-contentful-paint'), tbtMs: num('total-blocking-time'), cls: Number((lhr.audits['cumulative-layout-shift']?.numericValue ?? NaN).toFixed(3)) });
+      // The JavaScript this page loaded, as sent over the network (compressed).
+      const requests = (lhr.audits['network-requests']?.details as { items?: Array<{ resourceType?: string; transferSize?: number }> } | undefined)?.items ?? [];
+      const scripts = requests.filter((r) => r.resourceType === 'Script');
+      results.push({ page: p.name, performance: score('performance'), accessibility: score('accessibility'), lcpMs: num('largest-contentful-paint'), tbtMs: num('total-blocking-time'), cls: Number((lhr.audits['cumulative-layout-shift']?.numericValue ?? NaN).toFixed(3)), scriptBytes: scripts.reduce((n, r) => n + (r.transferSize ?? 0), 0), scripts: scripts.length });
       const failed = Object.values(lhr.audits).filter((a) => a.score !== null && a.score < 1 && lhr.categories.accessibility.auditRefs.some((r) => r.id === a.id && r.weight > 0));
       for (const a of failed) say(`  ${p.name}: accessibility audit "${a.title}" not passed`);
       // The final URL must be the page asked for (not bounced to sign-in).
       if (new URL(lhr.finalDisplayedUrl).pathname !== new URL(p.url).pathname) throw new Error(`${p.name}: ended on ${lhr.finalDisplayedUrl}`);
     }
     for (const r of results) {
-      say(`${r.page.padEnd(10)} performance ${r.performance} (≥ ${TARGETS.performance})  accessibility ${r.accessibility} (≥ ${TARGETS.accessibility})  LCP ${r.lcpMs} ms  TBT ${r.tbtMs} ms  CLS ${r.cls}`);
+      say(`${r.page.padEnd(10)} performance ${r.performance} (≥ ${TARGETS.performance})  accessibility ${r.accessibility} (≥ ${TARGETS.accessibility})  LCP ${r.lcpMs} ms  TBT ${r.tbtMs} ms  CLS ${r.cls}  JavaScript loaded ${kb(r.scriptBytes)} in ${r.scripts} files`);
     }
     const bundles = bundleSizes();
-    for (const b of bundles) say(`bundle ${b.file}: ${(b.raw / 1024).toFixed(0)} KB raw, ${(b.gzip / 1024).toFixed(0)} KB gzipped`);
+    for (const b of bundles.filter((x) => /^(entry|__common)-/.test(x.file))) say(`bundle ${b.file}: ${kb(b.raw)} raw, ${kb(b.gzip)} gzipped, ${kb(b.brotli)} Brotli (as served)`);
+    const routes = bundles.filter((x) => !/^(entry|__common)-/.test(x.file));
+    say(`${routes.length} more chunks (routes, layouts, runtime), loaded as needed: ${kb(routes.reduce((n, x) => n + x.raw, 0))} raw in all, largest ${routes[0]?.file} ${kb(routes[0]?.raw ?? 0)}`);
     const out = path.join(ROOT, 'test-artifacts', 'lighthouse.json');
     fs.mkdirSync(path.dirname(out), { recursive: true });
     fs.writeFileSync(out, JSON.stringify({ at: new Date().toISOString(), results, bundles }, null, 2));
