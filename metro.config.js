@@ -42,8 +42,8 @@ config.resolver.resolveRequest = (context, moduleName, platform) => {
 
 // Inline requires: an imported module runs when its export is first used, not
 // when its importer loads. The first screen then skips most of expo-router's
-// navigators and every screen's modules it never touches (about a third of the
-// JavaScript the sign-in page used to run). Warning: a module whose import has
+// navigators and the modules of screens it never shows (the sign-in page runs
+// 1.15 MB of module code instead of 1.47 MB). Warning: a module whose import has
 // side effects the importer relies on must be imported bare (`import 'x'`),
 // which is never inlined.
 const upstreamTransformOptions = config.transformer.getTransformOptions;
