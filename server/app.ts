@@ -1,6 +1,7 @@
 import express, { type RequestHandler } from 'express';
 import type { PassportStatic } from 'passport';
 import helmet from 'helmet';
+import compression from 'compression';
 import { pinoHttp } from 'pino-http';
 import type { Knex } from 'knex';
 import type { Config } from './config';
@@ -68,6 +69,9 @@ export function createApp(deps: AppDeps) {
 
   const passport = createPassport(knex);
   const api = express.Router();
+  // JSON answers over 1 KB go compressed to browsers (a walk is about 30 KB, a fifth of that compressed, on a
+  // bay's weak signal). Answers already compressed (kept-json.ts) and photos pass through untouched.
+  api.use(compression({ threshold: 1024 }));
   api.use(express.json({ limit: '256kb' }));
   api.use(csrfGuard);
   // Health answers even when the session store (the database) is down.

@@ -47,8 +47,10 @@ describe('walks API', () => {
 
   it('walks a stock tree to a cause, judging readings and recording every step', async () => {
     const id = await startWalk(ctx.tech, ctx.jobId, ctx.treeId);
-    const start = await ctx.tech.get(`/api/walks/${id}`);
+    const start = await ctx.tech.get(`/api/walks/${id}`).set('Accept-Encoding', 'gzip, deflate, br');
     expect(start.status).toBe(200);
+    // A walk with its tree document is tens of kilobytes: a browser gets it compressed.
+    expect(start.headers['content-encoding']).toMatch(/^(br|gzip)$/);
     expect(start.body.position).toMatchObject({ stepId: 'trim-idle', final: false, stepsTaken: 0 });
     expect(start.body.position.shortestToCause).toBeGreaterThan(0);
     expect(start.body.walk.tree).toMatchObject({ id: ctx.treeId, versionId: ctx.versionId });
