@@ -19,6 +19,9 @@ export function knexSettings(db = loadConfig().db): Knex.Config {
       dateStrings: false,
       supportBigNumbers: true,
       connectTimeout: 3000,
+      // The walk step append sends its statements as two batches (server/repositories/walk-append-repository.ts).
+      // Every value is still a binding escaped by the driver; never build SQL text from input.
+      multipleStatements: true,
     },
     pool: { min: 0, max: 20 },
     acquireConnectionTimeout: 5000,

@@ -60,6 +60,25 @@ export interface WalkPhotoRow {
 // mysql2 ≥ 3.23 returns MariaDB JSON columns parsed, older drivers give strings.
 const parseJson = (v: unknown) => (typeof v === 'string' ? JSON.parse(v) : v);
 
+/** The walk row, locked until its transaction ends, so steps of one walk are written one at a time. */
+export const walkLockQuery = (db: Knex, shopId: number, id: number) => db<WalkRow>('walks').where({ shop_id: shopId, id }).forUpdate().first();
+
+/** A walk's step records in order, each with the name of who recorded it (rows still to go through toStepRow). */
+export const stepRowsQuery = (db: Knex, walkId: number) =>
+  db('walk_steps').leftJoin('users', 'users.id', 'walk_steps.user_id').where('walk_steps.walk_id', walkId).orderBy('walk_steps.seq').select('walk_steps.*', 'users.name as user_name');
+
+export const toStepRow = (r: WalkStepRow): WalkStepRow => ({ ...r, event: parseJson(r.event) as WalkStepRow['event'], judgement: parseJson(r.judgement) });
+
+export const insertStepQuery = (db: Knex, row: Omit<WalkStepRow, 'user_name'> | Omit<WalkStepRow, 'created_at' | 'user_name'>) =>
+  db('walk_steps').insert({
+    ...row,
+    event: row.event === null ? null : JSON.stringify(row.event),
+    judgement: row.judgement === null || row.judgement === undefined ? null : JSON.stringify(row.judgement),
+  });
+
+export type WalkPatch = { [K in keyof WalkRow]?: WalkRow[K] | Knex.Raw };
+export const walkUpdateQuery = (db: Knex, shopId: number, id: number, patch: WalkPatch) => db('walks').where({ shop_id: shopId, id }).update(patch);
+
 /** Walks, their append-only step records and photo links; every query is scoped by shop. */
 export function createWalkRepository(knex: Knex) {
   const walkQuery = (db: Knex, shopId: number) =>
@@ -81,24 +100,20 @@ export function createWalkRepository(knex: Knex) {
 
     /** Locks the walk row until the transaction ends, so steps of one walk are written one at a time. */
     async lock(trx: Knex.Transaction, shopId: number, id: number): Promise<WalkRow | undefined> {
-      return trx<WalkRow>('walks').where({ shop_id: shopId, id }).forUpdate().first();
+      return walkLockQuery(trx, shopId, id);
     },
 
     async listForJob(shopId: number, jobId: number): Promise<WalkRow[]> {
       return walkQuery(knex, shopId).andWhere('walks.job_id', jobId).orderBy('walks.started_at', 'desc').orderBy('walks.id', 'desc');
     },
 
-    async update(trx: Knex, shopId: number, id: number, patch: { [K in keyof WalkRow]?: WalkRow[K] | Knex.Raw }): Promise<void> {
-      await trx('walks').where({ shop_id: shopId, id }).update(patch);
+    async update(trx: Knex, shopId: number, id: number, patch: WalkPatch): Promise<void> {
+      await walkUpdateQuery(trx, shopId, id, patch);
     },
 
     async steps(walkId: number, db: Knex = knex): Promise<WalkStepRow[]> {
-      const rows: WalkStepRow[] = await db('walk_steps')
-        .leftJoin('users', 'users.id', 'walk_steps.user_id')
-        .where('walk_steps.walk_id', walkId)
-        .orderBy('walk_steps.seq')
-        .select('walk_steps.*', 'users.name as user_name');
-      return rows.map((r) => ({ ...r, event: parseJson(r.event), judgement: parseJson(r.judgement) }));
+      const rows: WalkStepRow[] = await stepRowsQuery(db, walkId);
+      return rows.map(toStepRow);
     },
 
     /** How many step records (answers and undos) a walk has. */
@@ -111,14 +126,6 @@ export function createWalkRepository(knex: Knex) {
     async photoCount(db: Knex, walkId: number): Promise<number> {
       const [{ n }] = await db('walk_photos').where({ walk_id: walkId }).count<{ n: number }[]>({ n: '*' });
       return Number(n);
-    },
-
-    async insertStep(trx: Knex, row: Omit<WalkStepRow, 'created_at' | 'user_name'>): Promise<void> {
-      await trx('walk_steps').insert({
-        ...row,
-        event: row.event === null ? null : JSON.stringify(row.event),
-        judgement: row.judgement === null || row.judgement === undefined ? null : JSON.stringify(row.judgement),
-      });
     },
 
     async photos(walkId: number): Promise<WalkPhotoRow[]> {

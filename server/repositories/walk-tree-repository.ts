@@ -12,30 +12,35 @@ export interface PinnedTree {
 
 const parseJson = (v: unknown) => (typeof v === 'string' ? JSON.parse(v) : v);
 
+type PinnedRow = { version_id: number; tree_id: number; version: number; doc: unknown; title: string; symptom: string };
+
+const pinnedBase = (db: Knex, shopId: number) =>
+  db('tree_versions as v')
+    .join('trees as t', 't.id', 'v.tree_id')
+    .where('t.shop_id', shopId)
+    .select('v.id as version_id', 'v.tree_id', 'v.version', 'v.doc', 't.title', 't.symptom');
+
+/** A pinned version of the shop by id, whatever has been published since (a row for toPinned). */
+export const pinnedVersionQuery = (db: Knex, shopId: number, versionId: number) => pinnedBase(db, shopId).andWhere('v.id', versionId).andWhere('v.shop_id', shopId).first();
+
+export function toPinned(r: PinnedRow | undefined): PinnedTree | undefined {
+  if (!r) return undefined;
+  const doc = parseJson(r.doc) as { title?: unknown } | null;
+  // The pinned document's own title: the library row may be renamed later.
+  const title = typeof doc?.title === 'string' ? doc.title : r.title;
+  return { treeId: r.tree_id, versionId: r.version_id, version: r.version, title, symptom: r.symptom, doc };
+}
+
 /**
  * Reads the tree library's tables for walks: the latest published version of
  * a tree (to pin at start) and a pinned version by id. Scoped by shop.
  */
 export function createWalkTreeRepository(knex: Knex) {
-  const base = (shopId: number, db: Knex = knex) =>
-    db('tree_versions as v')
-      .join('trees as t', 't.id', 'v.tree_id')
-      .where('t.shop_id', shopId)
-      .select('v.id as version_id', 'v.tree_id', 'v.version', 'v.doc', 't.title', 't.symptom');
-  const toPinned = (r: { version_id: number; tree_id: number; version: number; doc: unknown; title: string; symptom: string } | undefined): PinnedTree | undefined =>
-    {
-    if (!r) return undefined;
-    const doc = parseJson(r.doc) as { title?: unknown } | null;
-    // The pinned document's own title: the library row may be renamed later.
-    const title = typeof doc?.title === 'string' ? doc.title : r.title;
-    return { treeId: r.tree_id, versionId: r.version_id, version: r.version, title, symptom: r.symptom, doc };
-  };
-
   return {
     /** The version the tree's library row marks as published (walks start from it); only active trees. */
     async latestPublished(shopId: number, treeId: number): Promise<PinnedTree | undefined> {
       return toPinned(
-        await base(shopId).andWhere('t.id', treeId).andWhere('t.status', 'active').andWhereRaw('v.id = t.published_version_id').andWhere('v.shop_id', shopId).first(),
+        await pinnedBase(knex, shopId).andWhere('t.id', treeId).andWhere('t.status', 'active').andWhereRaw('v.id = t.published_version_id').andWhere('v.shop_id', shopId).first(),
       );
     },
     /**
@@ -53,7 +58,7 @@ export function createWalkTreeRepository(knex: Knex) {
     },
     /** A pinned version by id, whatever has been published since. */
     async version(shopId: number, versionId: number, db: Knex = knex): Promise<PinnedTree | undefined> {
-      return toPinned(await base(shopId, db).andWhere('v.id', versionId).andWhere('v.shop_id', shopId).first());
+      return toPinned(await pinnedVersionQuery(db, shopId, versionId));
     },
   };
 }

@@ -2,8 +2,9 @@ import type { Knex } from 'knex';
 import { applyEvent, parseTree, replayWalk, shortestToCause, TreeEngineError, type WalkContext, type WalkEvent } from '@/trees/engine';
 import type { TreeDoc } from '@/trees/tree-format';
 import type { WalkDetail, WalkFinish, WalkPhoto, WalkPosition, WalkStepAnswer, WalkSummary } from '@/shared/schemas/walks';
-import { createWalkRepository, type WalkRow, type WalkStepRow } from '../repositories/walk-repository';
-import { createWalkTreeRepository, type PinnedTree } from '../repositories/walk-tree-repository';
+import { createWalkRepository, insertStepQuery, walkUpdateQuery, type WalkPatch, type WalkRow, type WalkStepRow } from '../repositories/walk-repository';
+import { createWalkAppendRepository, type WalkAppend } from '../repositories/walk-append-repository';
+import { createWalkTreeRepository, pinnedVersionQuery, toPinned, type PinnedTree } from '../repositories/walk-tree-repository';
 import { createJobRepository } from '../repositories/job-repository';
 import { AppError, badRequest, conflict, notFound } from '../errors';
 import type { PhotoService } from './photo-service';
@@ -43,19 +44,24 @@ const contextOf = (w: WalkRow): WalkContext => ({ altitudeM: w.altitude_m, ...(w
 /** Walks: start on a job, record answers that the pinned tree accepts, undo, photos, finish. */
 export function createWalkService(knex: Knex, photos: PhotoService) {
   const walks = createWalkRepository(knex);
+  const appends = createWalkAppendRepository(knex);
   const trees = createWalkTreeRepository(knex);
   const jobs = createJobRepository(knex);
 
-  // Inside a transaction, pass the transaction: a second pooled connection per request can starve the pool.
-  /** The parsed document of a walk's version: from memory once parsed (a version never changes), else one query. */
-  async function pinnedDoc(shopId: number, w: WalkRow, db: Knex): Promise<TreeDoc> {
+  /**
+   * The parsed document of a walk's version: from memory once parsed (a version
+   * never changes), else read inside the step's own transaction (a second
+   * pooled connection per request could starve the pool under load).
+   */
+  async function pinnedDoc(shopId: number, w: WalkRow, tx: WalkAppend): Promise<TreeDoc> {
     const cached = docCache.get(w.tree_version_id);
     if (cached) return cached;
-    const tree = await trees.version(shopId, w.tree_version_id, db);
+    const tree = toPinned(await tx.first(pinnedVersionQuery(knex, shopId, w.tree_version_id)));
     if (!tree) throw notFound('The tree version of this walk');
     return parsedDoc(tree);
   }
 
+  // Inside a transaction, pass the transaction: a second pooled connection per request can starve the pool.
   async function pinned(shopId: number, w: WalkRow, db: Knex = knex): Promise<{ tree: PinnedTree; doc: TreeDoc }> {
     // The document of a version never changes: once parsed, only the small facts are read again.
     const cached = docCache.get(w.tree_version_id);
@@ -98,20 +104,31 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
     return row;
   }
 
-  /** Records a step; a step id another walk already used is a conflict, not a server error. */
-  async function insertNew(trx: Knex.Transaction, row: Omit<WalkStepRow, 'user_name'>) {
+  /** Writes a step and the walk's new position, and commits; a step id another walk already used is a conflict, not a server error. */
+  async function commitStep(tx: WalkAppend, actor: Actor, row: Omit<WalkStepRow, 'user_name'>, patch: WalkPatch) {
     try {
-      await walks.insertStep(trx, row);
+      await tx.commit(insertStepQuery(knex, row), walkUpdateQuery(knex, actor.shopId, row.walk_id, patch));
     } catch (err) {
       if ((err as { errno?: number }).errno === 1062) throw stepIdTaken();
       throw err;
     }
   }
 
+  /** Runs one answer's transaction on a walk; it always ends, committed by `commitStep` or rolled back. */
+  async function onLockedWalk<T>(actor: Actor, walkId: number, work: (tx: WalkAppend) => Promise<T>): Promise<T> {
+    const tx = await appends.open(actor.shopId, walkId);
+    if (!tx) throw notFound('That walk');
+    try {
+      return await work(tx);
+    } finally {
+      await tx.end();
+    }
+  }
+
   /** The answer to a retry: the record as first stored, and where the walk stands now. */
-  async function retried(trx: Knex.Transaction, actor: Actor, w: WalkRow, steps: readonly WalkStepRow[], seen: WalkStepRow): Promise<WalkStepAnswer> {
-    const position = positionOf(await pinnedDoc(actor.shopId, w, trx), steps, contextOf(w));
-    return { step: toStepRecord(seen, effectiveSteps(steps).undone), position };
+  async function retried(tx: WalkAppend, actor: Actor, seen: WalkStepRow): Promise<WalkStepAnswer> {
+    const position = positionOf(await pinnedDoc(actor.shopId, tx.walk, tx), tx.steps, contextOf(tx.walk));
+    return { step: toStepRecord(seen, effectiveSteps(tx.steps).undone), position };
   }
 
   /** The answer to a step just recorded: built from what the transaction holds, with no read back. */
@@ -178,15 +195,14 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
      * append the step only if the tree accepts the event.
      */
     async step(actor: Actor, walkId: number, input: { stepId: string; event: WalkEvent; note: string | null }, cap?: RecordCap): Promise<WalkStepAnswer> {
-      // Five round trips: lock, read the steps, insert, update, commit. The answer is built from what is known.
-      return knex.transaction(async (trx) => {
-        const w = await findOpenLocked(trx, actor, walkId);
-        const steps = await walks.steps(w.id, trx);
+      // Two round trips (walk-append-repository.ts); the answer is built from what is known, with no read back.
+      return onLockedWalk(actor, walkId, async (tx) => {
+        const { walk: w, steps } = tx;
         const seen = earlier(steps, input.stepId, 'event');
-        if (seen) return retried(trx, actor, w, steps, seen);
+        if (seen) return retried(tx, actor, seen);
         if (w.status !== 'open') throw finishedRefusal();
         if (cap && steps.length >= cap.max) throw cap.refusal();
-        const doc = await pinnedDoc(actor.shopId, w, trx);
+        const doc = await pinnedDoc(actor.shopId, w, tx);
         const events = liveEvents(steps);
         // One replay: the engine returns the path, whose last two steps are where the answer was given and where it leads.
         const result = fitted(() => applyEvent(doc, events, input.event, contextOf(w)));
@@ -212,8 +228,7 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
           // Stamped here, to the millisecond the column keeps, so a retry reads back exactly this answer.
           created_at: new Date(),
         };
-        await insertNew(trx, row);
-        await walks.update(trx, actor.shopId, w.id, { current_step: result.stepId, step_count: events.length + 1, last_step_at: row.created_at });
+        await commitStep(tx, actor, row, { current_step: result.stepId, step_count: events.length + 1, last_step_at: row.created_at });
         return recorded(actor, row, {
           stepId: result.stepId,
           final: result.final,
@@ -226,14 +241,13 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
 
     /** Takes back the latest answer still in force, as a record of its own. */
     async undo(actor: Actor, walkId: number, input: { stepId: string }, cap?: RecordCap): Promise<WalkStepAnswer> {
-      return knex.transaction(async (trx) => {
-        const w = await findOpenLocked(trx, actor, walkId);
-        const steps = await walks.steps(w.id, trx);
+      return onLockedWalk(actor, walkId, async (tx) => {
+        const { walk: w, steps } = tx;
         const seen = earlier(steps, input.stepId, 'undo');
-        if (seen) return retried(trx, actor, w, steps, seen);
+        if (seen) return retried(tx, actor, seen);
         if (w.status !== 'open') throw finishedRefusal();
         if (cap && steps.length >= cap.max) throw cap.refusal();
-        const doc = await pinnedDoc(actor.shopId, w, trx);
+        const doc = await pinnedDoc(actor.shopId, w, tx);
         const { live } = effectiveSteps(steps);
         const last = live.at(-1);
         if (!last) throw conflict('There is nothing to undo: this walk is at its first step.');
@@ -256,8 +270,7 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
           user_id: actor.id,
           created_at: new Date(),
         };
-        await insertNew(trx, row);
-        await walks.update(trx, actor.shopId, w.id, { current_step: last.from_step, step_count: live.length - 1, last_step_at: row.created_at });
+        await commitStep(tx, actor, row, { current_step: last.from_step, step_count: live.length - 1, last_step_at: row.created_at });
         return recorded(actor, row, positionOf(doc, [...steps, { ...row, user_name: null }], contextOf(w)));
       });
     },
