@@ -14,16 +14,35 @@ describe('shortCache', () => {
     expect(loads).toBe(1);
   });
 
-  it('loads again once the entry is older than its lifetime', async () => {
+  it('never serves an entry older than its lifetime; in its second half, serves it while one reload runs', async () => {
     vi.useFakeTimers();
     const cache = shortCache<string, number>(1000);
     let loads = 0;
     const load = async () => ++loads;
     expect(await cache.get('k', load)).toBe(1);
-    vi.advanceTimersByTime(999);
+    vi.advanceTimersByTime(499);
     expect(await cache.get('k', load)).toBe(1);
+    expect(loads).toBe(1);
+    // Second half: the kept value answers at once, and a single reload starts behind it.
     vi.advanceTimersByTime(1);
+    const [a, b] = [cache.get('k', load), cache.get('k', load)];
+    expect(loads).toBe(2);
+    expect([await a, await b]).toEqual([1, 1]);
     expect(await cache.get('k', load)).toBe(2);
+    // Past the lifetime with no request in between: the caller waits for a fresh value.
+    vi.advanceTimersByTime(1000);
+    expect(await cache.get('k', load)).toBe(3);
+  });
+
+  it('drops an entry whose background reload failed, so the next caller sees the failure', async () => {
+    vi.useFakeTimers();
+    const cache = shortCache<string, number>(1000);
+    expect(await cache.get('k', async () => 1)).toBe(1);
+    vi.advanceTimersByTime(600);
+    expect(await cache.get('k', () => Promise.reject(new Error('database down')))).toBe(1);
+    await Promise.resolve();
+    await Promise.resolve();
+    await expect(cache.get('k', () => Promise.reject(new Error('database down')))).rejects.toThrow('database down');
   });
 
   it('forgets a key at once, and never keeps a failed load', async () => {
