@@ -1,7 +1,6 @@
 import express, { type RequestHandler } from 'express';
 import type { PassportStatic } from 'passport';
 import helmet from 'helmet';
-import compression from 'compression';
 import { pinoHttp } from 'pino-http';
 import type { Knex } from 'knex';
 import type { Config } from './config';
@@ -69,10 +68,6 @@ export function createApp(deps: AppDeps) {
 
   const passport = createPassport(knex);
   const api = express.Router();
-  // JSON answers over 4 KB go compressed to browsers (a walk is about 30 KB, a fifth of that compressed, on a
-  // bay's weak signal). Smaller ones (a step's answer) are not worth the work on every request. Answers already
-  // compressed (kept-json.ts) and photos pass through untouched.
-  api.use(compression({ threshold: 4096 }));
   api.use(express.json({ limit: '256kb' }));
   api.use(csrfGuard);
   // Health answers even when the session store (the database) is down.

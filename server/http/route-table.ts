@@ -2,7 +2,7 @@ import type { Request, Response, Router, RequestHandler } from 'express';
 import type { ZodType } from 'zod';
 import { badRequest } from '../errors';
 import { zodDetails } from './zod-details';
-import { sendKeptJson } from './kept-json';
+import { sendJsonAnswer, sendKeptJson } from './json-answers';
 
 /**
  * Who may call a route: 'public' for anyone, else the staff roles allowed,
@@ -56,15 +56,15 @@ export function mountRoutes(router: Router, routes: readonly RouteDef[], guard: 
         return;
       }
       res.status(route.status ?? 200);
-      sendJson(req, res, result);
+      await sendJson(req, res, result);
     });
   }
 }
 
-/** Sends an answer as JSON; a frozen answer (one a service keeps and hands out again) is serialized once (kept-json.ts). */
-function sendJson(req: Request, res: Response, result: unknown) {
+/** Sends an answer as JSON; a frozen answer (one a service keeps and hands out again) is serialized once (json-answers.ts). */
+async function sendJson(req: Request, res: Response, result: unknown) {
   if (typeof result === 'object' && result !== null && Object.isFrozen(result)) sendKeptJson(req, res, result);
-  else res.json(result);
+  else await sendJsonAnswer(req, res, result);
 }
 
 function parseWith(schema: ZodType | undefined, value: unknown, where: string) {

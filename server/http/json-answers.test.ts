@@ -4,7 +4,7 @@ import zlib from 'node:zlib';
 import express from 'express';
 import request from 'supertest';
 import { describe, expect, it } from 'vitest';
-import { sendKeptJson } from './kept-json';
+import { sendJsonAnswer, sendKeptJson } from './json-answers';
 
 const page = Object.freeze({ title: 'Lean after an intake manifold', steps: Array.from({ length: 200 }, (_, i) => ({ id: `step-${i}`, body: 'Spray around the runner flanges with the engine idling.' })) });
 const small = Object.freeze({ ok: true });
@@ -13,6 +13,8 @@ function app() {
   const a = express();
   a.get('/page', (req, res) => sendKeptJson(req, res, page));
   a.get('/small', (req, res) => sendKeptJson(req, res, small));
+  a.get('/made', (req, res, next) => sendJsonAnswer(req, res, { ...page }).catch(next));
+  a.get('/made-small', (req, res, next) => sendJsonAnswer(req, res, { ok: true }).catch(next));
   return a;
 }
 
@@ -32,7 +34,7 @@ function fetchRaw(a: express.Express, path: string, acceptEncoding: string): Pro
   });
 }
 
-describe('sendKeptJson', () => {
+describe('JSON answers', () => {
   it('sends Brotli to a client that takes it, gzip to one that takes only gzip, plain text otherwise, all the same JSON', async () => {
     const a = app();
     const br = await fetchRaw(a, '/page', 'gzip, deflate, br, zstd');
@@ -62,5 +64,17 @@ describe('sendKeptJson', () => {
     const tiny = await request(a).get('/small').set('Accept-Encoding', 'br');
     expect(tiny.headers['content-encoding']).toBeUndefined();
     expect(tiny.body).toEqual({ ok: true });
+  });
+
+  it('compresses an answer made for the request once it is 4 KB or more, and leaves small ones alone', async () => {
+    const a = app();
+    const br = await fetchRaw(a, '/made', 'gzip, deflate, br');
+    expect(br.headers['content-encoding']).toBe('br');
+    expect(JSON.parse(zlib.brotliDecompressSync(br.body).toString())).toEqual(page);
+    const gz = await fetchRaw(a, '/made', 'gzip');
+    expect(JSON.parse(zlib.gunzipSync(gz.body).toString())).toEqual(page);
+    const small = await fetchRaw(a, '/made-small', 'gzip, deflate, br');
+    expect(small.headers['content-encoding']).toBeUndefined();
+    expect(JSON.parse(small.body.toString())).toEqual({ ok: true });
   });
 });
