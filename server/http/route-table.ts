@@ -1,4 +1,4 @@
-import type { Request, Response, Router, RequestHandler } from 'express';
+import express, { type Request, type Response, type Router, type RequestHandler } from 'express';
 import type { ZodType } from 'zod';
 import { badRequest } from '../errors';
 import { zodDetails } from './zod-details';
@@ -42,12 +42,14 @@ export type AccessGuard = (allow: Access) => RequestHandler;
 
 /** Mounts route definitions on a router: access → extra middleware → validation → handler. */
 export function mountRoutes(router: Router, routes: readonly RouteDef[], guard: AccessGuard) {
+  const groups = new Map<string, Router>();
   for (const route of routes) {
     if (!route.allow) throw new Error(`Route ${route.method.toUpperCase()} ${route.path} declares no access rule`);
     if (route.allow !== 'public' && route.allow.includes('guest') && route.allow.length !== 1) {
       throw new Error(`Route ${route.method.toUpperCase()} ${route.path} mixes guest access with staff roles`);
     }
-    router[route.method](route.path, guard(route.allow), ...(route.before ?? []), async (req, res) => {
+    const { on, path } = groupFor(router, groups, route.path);
+    on[route.method](path, guard(route.allow), ...(route.before ?? []), async (req, res) => {
       const body = parseWith(route.body, req.body ?? {}, 'body');
       const query = parseWith(route.query, req.query, 'query');
       const result = await route.handler({ body, query, params: req.params as Record<string, string>, req, res });
@@ -65,6 +67,24 @@ export function mountRoutes(router: Router, routes: readonly RouteDef[], guard: 
 async function sendJson(req: Request, res: Response, result: unknown) {
   if (typeof result === 'object' && result !== null && Object.isFrozen(result)) sendKeptJson(req, res, result);
   else await sendJsonAnswer(req, res, result);
+}
+
+/**
+ * Routes are grouped by the first segment of their path (/trees, /walks, …),
+ * each group on a router of its own, so a request is matched against its own
+ * group's few routes instead of the whole table (Express tries them in turn).
+ * Order within a group is the table's order; groups never share a path.
+ */
+function groupFor(router: Router, groups: Map<string, Router>, fullPath: string): { on: Router; path: string } {
+  const first = fullPath.split('/')[1] ?? '';
+  if (!first || first.startsWith(':')) return { on: router, path: fullPath };
+  let group = groups.get(first);
+  if (!group) {
+    group = express.Router();
+    groups.set(first, group);
+    router.use(`/${first}`, group);
+  }
+  return { on: group, path: fullPath.slice(first.length + 1) || '/' };
 }
 
 function parseWith(schema: ZodType | undefined, value: unknown, where: string) {
