@@ -1,4 +1,5 @@
 import { apiErrorSchema } from '@/shared/schemas/api-error';
+import { forgetEarlyResponses, takeEarlyResponse } from './early-requests';
 
 /** An API refusal with the server's message and field details. */
 export class ApiError extends Error {
@@ -22,9 +23,13 @@ export class ApiError extends Error {
  */
 export async function api<T>(path: string, init: RequestInit & { json?: unknown; acceptStatuses?: number[] } = {}): Promise<T> {
   const { json, acceptStatuses = [], headers, ...rest } = init;
+  const isRead = (rest.method ?? 'GET').toUpperCase() === 'GET' && json === undefined && rest.body == null;
+  if (!isRead) forgetEarlyResponses();
+  // A read the page started before this code arrived (public/early-requests.js).
+  const started = isRead && headers === undefined ? takeEarlyResponse(path) : undefined;
   let res: Response;
   try {
-    res = await fetch(`/api${path}`, {
+    res = await (started ?? fetch(`/api${path}`, {
       credentials: 'same-origin',
       ...rest,
       headers: {
@@ -35,7 +40,7 @@ export async function api<T>(path: string, init: RequestInit & { json?: unknown;
         ...headers,
       },
       body: json !== undefined ? JSON.stringify(json) : rest.body,
-    });
+    }));
   } catch {
     throw new ApiError(0, 'network', 'Baywalk cannot reach the server. Check the connection and try again.');
   }
