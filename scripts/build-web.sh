@@ -16,6 +16,13 @@ if [ -n "$PRELOADS" ]; then
   grep -q '</head>' "$TMP/index.html" || die "the exported index.html has no </head>"
   PRELOADS="$PRELOADS" node -e 'const fs=require("fs");const f=process.argv[1];fs.writeFileSync(f,fs.readFileSync(f,"utf8").replace("</head>",process.env.PRELOADS+"</head>"))' "$TMP/index.html"
 fi
+# public/early-requests.js preloads the walk screen's route chunk on /walks/<id>
+# (otherwise fetched only once the session is known): write in its hashed name.
+# It is the [id] chunk that calls useStaffWalkSource (property names survive minifying).
+WALK_CHUNK="$(grep -l 'useStaffWalkSource' "$TMP"/_expo/static/js/web/\[id\]-*.js | head -n 1 || true)"
+[ -n "$WALK_CHUNK" ] || die "could not find the walk screen's route chunk"
+grep -q '__WALK_ROUTE_CHUNK__' "$TMP/early-requests.js" || die "public/early-requests.js has no __WALK_ROUTE_CHUNK__"
+sed -i "s#__WALK_ROUTE_CHUNK__#/_expo/static/js/web/$(basename "$WALK_CHUNK")#" "$TMP/early-requests.js"
 # Brotli at its best quality is too slow for a request but fine once per build.
 node --import tsx -e 'require("./server/http/compressed-assets.ts").precompress(process.argv[1]).then((n) => console.log(`precompressed ${n} files`))' "$TMP" \
   || die "could not precompress the web build"

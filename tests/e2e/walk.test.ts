@@ -92,9 +92,23 @@ describe('a job and a walk in Chromium', () => {
     await waitForStep(page, 'Measure manifold vacuum at idle');
 
     // A reload resumes at the same step: the state is the server's.
+    const reads: string[] = [];
+    const onRequest = (r: { url(): string }) => {
+      const path = new URL(r.url()).pathname;
+      if (path.startsWith('/api/') || path.includes('/js/web/[id]-')) reads.push(path);
+    };
+    page.on('request', onRequest);
     await page.reload();
     await waitForStep(page, 'Measure manifold vacuum at idle');
     expect(page.url()).toBe(walkUrl);
+    page.off('request', onRequest);
+    // The page asked for the session, the walk and the route chunk before its
+    // JavaScript ran (public/early-requests.js), and the app used those answers
+    // instead of asking again.
+    const walkApi = new URL(walkUrl).pathname.replace('/walks/', '/api/walks/');
+    expect(reads.filter((p) => p === walkApi)).toHaveLength(1);
+    expect(reads.filter((p) => p === '/api/auth/me')).toHaveLength(1);
+    expect(reads.filter((p) => p.includes('/js/web/[id]-'))).toHaveLength(1);
 
     await page.getByTestId('reading-value').fill('15');
     await page.getByTestId('reading-verdict-low').waitFor();
