@@ -30,12 +30,14 @@ function makeCaches() {
   };
 }
 
-// One set per database handle: test processes run several databases side by side, and ids repeat between them.
-const byDatabase = new WeakMap<Knex, ReturnType<typeof makeCaches>>();
+// One set per database pool (keyed by its settings object, which its transactions share): test processes run
+// several databases side by side, and ids repeat between them.
+const byDatabase = new WeakMap<object, ReturnType<typeof makeCaches>>();
 
-/** The identity caches of one database handle (the app's knex, not a transaction). */
+/** The identity caches of one database pool; a transaction of the pool finds the same ones. */
 export function identityCache(knex: Knex) {
-  let caches = byDatabase.get(knex);
-  if (!caches) byDatabase.set(knex, (caches = makeCaches()));
+  const key = knex.client.config as object;
+  let caches = byDatabase.get(key);
+  if (!caches) byDatabase.set(key, (caches = makeCaches()));
   return caches;
 }
