@@ -9,10 +9,11 @@
 (function () {
   if (typeof fetch !== 'function') return;
   var paths = ['/auth/me'];
-  var walk = /^\/walks\/(\d+)(?:\/report)?\/?$/.exec(location.pathname);
+  var walk = /^\/walks\/(\d+)(\/report)?\/?$/.exec(location.pathname);
   if (walk) paths.push('/walks/' + walk[1]);
   var walkChunk = '__WALK_ROUTE_CHUNK__';
-  if (walk && walkChunk.indexOf('/') === 0) {
+  // The report (/walks/<id>/report) reads the same walk but has a route chunk of its own.
+  if (walk && !walk[2] && walkChunk.indexOf('/') === 0) {
     var link = document.createElement('link');
     link.rel = 'preload';
     link.as = 'script';
