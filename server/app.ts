@@ -70,8 +70,9 @@ export function createApp(deps: AppDeps) {
   const api = express.Router();
   api.use(express.json({ limit: '256kb' }));
   api.use(csrfGuard);
-  // Health answers even when the session store (the database) is down.
-  const withSession = [sessionMiddleware(knex, config), passport.initialize(), passport.session()];
+  // Health answers even when the session store (the database) is down. `compat: false`: no passport 0.4
+  // strategies here, so none of the per-request properties kept for them.
+  const withSession = [sessionMiddleware(knex, config), passport.initialize({ compat: false }), passport.session()];
   api.use((req, res, next) => (req.path === '/health' ? next() : runAll(withSession, req, res, next)));
   mountRoutes(api, apiRoutes(services, passport as unknown as PassportStatic), accessGuard);
   api.use(apiNotFound);
