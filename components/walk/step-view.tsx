@@ -55,17 +55,6 @@ export function StepView({ walk, source, sender, answers }: Props) {
             <Text style={styles.body}>{meta.refer.reason}</Text>
           </View>
         ) : null}
-        {final ? null : (
-          <TextField
-            label="Note (optional, saved with your answer)"
-            value={note}
-            onChangeText={setNote}
-            multiline
-            numberOfLines={2}
-            placeholder="What you saw, part numbers, torque…"
-            testID="step-note"
-          />
-        )}
         {meta.kind === 'reading' && answers[0] ? (
           <ReadingForm
             doc={walk.doc}
@@ -80,6 +69,18 @@ export function StepView({ walk, source, sender, answers }: Props) {
         {(meta.kind === 'ask' || meta.kind === 'action') && answers.length ? (
           <AnswerButtons answers={answers} busy={sender.busy} onAnswer={(a) => void sender.answer({ type: a.event }, note.trim() || null, `“${a.label}”`)} />
         ) : null}
+        {/* After the answers: on a phone the one tap most steps need stays on the first screen, under the instructions. */}
+        {final ? null : (
+          <TextField
+            label="Note (optional): type it before you answer"
+            value={note}
+            onChangeText={setNote}
+            multiline
+            numberOfLines={2}
+            placeholder="What you saw, part numbers, torque…"
+            testID="step-note"
+          />
+        )}
       </View>
       <View style={styles.card}>
         <PhotoPanel source={source} stepId={stepId} photos={photos} prompts={meta.photoPrompts} readOnly={false} />
