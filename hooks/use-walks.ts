@@ -64,7 +64,8 @@ export function useStaffWalkSource(id: number): WalkSource {
   };
   return {
     data: walk.data,
-    isLoading: walk.isPending,
+    // isLoading, not isPending: an address that names no walk never fetches, and must not spin for ever.
+    isLoading: walk.isLoading,
     error: walk.error,
     refetch: () => void walk.refetch(),
     sendStep: (input) => post<WalkStepAnswer>(`/walks/${id}/steps`, input),

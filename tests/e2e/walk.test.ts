@@ -152,4 +152,14 @@ describe('a job and a walk in Chromium', () => {
     expect(errors).toEqual([]);
     await page.close();
   });
+
+  it('says so, instead of waiting for ever, at an address that names no walk', async () => {
+    const page = await browser.newPage({ viewport: PHONE });
+    await signIn(page, shop.people.tech.email);
+    await page.goto(server.url + '/walks/not-a-walk');
+    await page.getByTestId('walk-error').waitFor({ timeout: 15_000 });
+    await page.goto(server.url + '/walks/999999999');
+    await page.getByTestId('walk-error').getByText('That walk was not found.').waitFor({ timeout: 15_000 });
+    await page.close();
+  });
 });
