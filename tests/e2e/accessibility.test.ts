@@ -1,10 +1,9 @@
 /// <reference types="node" />
 import crypto from 'node:crypto';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
 import { installStockTrees } from '@/server/services/tree-stock';
-import { DESKTOP, PHONE, launchBrowser, screenshot } from '../support/browser';
-import { startTestServer } from '../support/test-app';
+import { DESKTOP, PHONE, screenshot, servedAppInChromium } from '../support/browser';
 import { signInThroughScreen } from '../support/sign-in-page';
 import { createShopWithPeople, signedIn, type TestShop } from '../support/people';
 
@@ -42,18 +41,15 @@ async function settled(page: Page) {
  * violations (names, labels, contrast, roles).
  */
 describe('accessibility of the main screens (axe-core in Chromium)', () => {
-  let server: Awaited<ReturnType<typeof startTestServer>>;
-  let browser: Browser;
+  const app = servedAppInChromium();
   let shop: TestShop;
   const screens: Array<[string, () => string]> = [];
 
   beforeAll(async () => {
-    server = await startTestServer();
-    browser = await launchBrowser();
-    shop = await createShopWithPeople(server.knex, 'Access');
-    await installStockTrees(server.knex, shop.shopId);
-    const owner = await signedIn(server.app, shop.people.owner.email);
-    const tree = await server.knex('trees').where({ shop_id: shop.shopId, slug: 'lean-after-intake-manifold' }).first('id');
+    shop = await createShopWithPeople(app.server.knex, 'Access');
+    await installStockTrees(app.server.knex, shop.shopId);
+    const owner = await signedIn(app.server.app, shop.people.owner.email);
+    const tree = await app.server.knex('trees').where({ shop_id: shop.shopId, slug: 'lean-after-intake-manifold' }).first('id');
     const job = await owner.post('/api/jobs').send({ roNumber: 'A11Y-1', customerName: 'Ada Brennan', make: 'Ford', model: 'Mustang', year: 2015, install: [{ type: 'intake_manifold', text: '' }] });
     const walk = await owner.post('/api/walks').send({ jobId: job.body.job.id, treeId: tree.id });
     // A reading step with a recorded answer behind it: the walk screen at its fullest.
@@ -70,15 +66,11 @@ describe('accessibility of the main screens (axe-core in Chromium)', () => {
       ['support', () => '/support'],
     );
   });
-  afterAll(async () => {
-    await browser?.close();
-    await server?.close();
-  });
 
   it('sign-in (signed out) has no serious or critical violations, at phone and desktop sizes', async () => {
     for (const viewport of [PHONE, DESKTOP]) {
-      const page = await browser.newPage({ viewport, bypassCSP: true });
-      await page.goto(`${server.url}/sign-in`);
+      const page = await app.browser.newPage({ viewport, bypassCSP: true });
+      await page.goto(`${app.server.url}/sign-in`);
       await page.getByTestId('sign-in-form').waitFor({ timeout: 30_000 });
       await settled(page);
       expect(await seriousViolations(page)).toEqual([]);
@@ -87,11 +79,11 @@ describe('accessibility of the main screens (axe-core in Chromium)', () => {
   });
 
   it('every main screen has no serious or critical violations (owner, 390x844)', async () => {
-    const page = await browser.newPage({ viewport: PHONE, bypassCSP: true });
-    await signInThroughScreen(page, server.url, shop.people.owner.email);
+    const page = await app.browser.newPage({ viewport: PHONE, bypassCSP: true });
+    await signInThroughScreen(page, app.server.url, shop.people.owner.email);
     const found: Record<string, string[]> = {};
     for (const [name, url] of screens) {
-      await page.goto(server.url + url());
+      await page.goto(app.server.url + url());
       await page.getByTestId('app-shell').waitFor({ timeout: 30_000 });
       await settled(page);
       // Still on the screen asked for (not bounced to sign-in or a not-found page).

@@ -1,7 +1,6 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { DESKTOP, PHONE, launchBrowser, screenshot, watchConsole } from '../support/browser';
-import { startTestServer } from '../support/test-app';
+import { describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { DESKTOP, PHONE, screenshot, servedAppInChromium, watchConsole } from '../support/browser';
 import { signInThroughScreen } from '../support/sign-in-page';
 import { createShopWithPeople, signedIn } from '../support/people';
 import { installStockTrees } from '@/server/services/tree-stock';
@@ -15,19 +14,9 @@ const CAUSE_TITLE = 'Cracked vacuum hose at the intake';
 const WAIT = { timeout: 30_000 };
 
 describe('Tree authoring in Chromium', () => {
-  let server: Awaited<ReturnType<typeof startTestServer>>;
-  let browser: Browser;
+  const app = servedAppInChromium();
 
-  beforeAll(async () => {
-    server = await startTestServer();
-    browser = await launchBrowser();
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await server?.close();
-  });
-
-  const signIn = (page: Page, email: string) => signInThroughScreen(page, server.url, email, { timeout: WAIT.timeout });
+  const signIn = (page: Page, email: string) => signInThroughScreen(page, app.server.url, email, { timeout: WAIT.timeout });
   const text = (page: Page, id: string) => page.getByTestId(id).innerText();
   const waitForText = (page: Page, id: string, pattern: RegExp) =>
     page.waitForFunction(
@@ -37,16 +26,16 @@ describe('Tree authoring in Chromium', () => {
     );
 
   it('refuses a later save with a clear message, asks before leaving with unsaved changes, and reloads the saved draft (1280x800)', async () => {
-    const shop = await createShopWithPeople(server.knex, 'Authoring conflict');
-    await installStockTrees(server.knex, shop.shopId);
-    const tree = await server.knex('trees').where({ shop_id: shop.shopId, slug: TREE }).first('id');
-    const owner = await signedIn(server.app, shop.people.owner.email);
+    const shop = await createShopWithPeople(app.server.knex, 'Authoring conflict');
+    await installStockTrees(app.server.knex, shop.shopId);
+    const tree = await app.server.knex('trees').where({ shop_id: shop.shopId, slug: TREE }).first('id');
+    const owner = await signedIn(app.server.app, shop.people.owner.email);
     expect((await owner.post(`/api/trees/${tree.id}/draft`)).status).toBe(201);
 
-    const page = await browser.newPage({ viewport: DESKTOP });
+    const page = await app.browser.newPage({ viewport: DESKTOP });
     const errors = watchConsole(page);
     await signIn(page, shop.people.lead.email);
-    await page.goto(`${server.url}/trees/${tree.id}/edit`);
+    await page.goto(`${app.server.url}/trees/${tree.id}/edit`);
     await page.getByTestId('step-form').waitFor(WAIT);
 
     // The owner saves the same draft after the lead opened it.
@@ -82,11 +71,11 @@ describe('Tree authoring in Chromium', () => {
   });
 
   it('refuses a malformed tree file naming the step, and creates a new tree straight into its draft (390x844)', async () => {
-    const shop = await createShopWithPeople(server.knex, 'Authoring new');
-    const page = await browser.newPage({ viewport: PHONE });
+    const shop = await createShopWithPeople(app.server.knex, 'Authoring new');
+    const page = await app.browser.newPage({ viewport: PHONE });
     const errors = watchConsole(page);
     await signIn(page, shop.people.lead.email);
-    await page.goto(`${server.url}/trees`);
+    await page.goto(`${app.server.url}/trees`);
     await page.getByTestId('new-tree').click();
     await page.getByTestId('tree-create').waitFor(WAIT);
 
@@ -115,14 +104,14 @@ describe('Tree authoring in Chromium', () => {
 
   for (const [name, viewport] of [['phone', PHONE], ['desktop', DESKTOP]] as const) {
     it(`a lead edits a step, adds an answer to a new cause step, clears the finding, publishes; a tech walks the new version (${viewport.width}x${viewport.height})`, async () => {
-      const shop = await createShopWithPeople(server.knex, `Authoring UI ${name}`);
-      await installStockTrees(server.knex, shop.shopId);
-      const tree = await server.knex('trees').where({ shop_id: shop.shopId, slug: TREE }).first('id');
+      const shop = await createShopWithPeople(app.server.knex, `Authoring UI ${name}`);
+      await installStockTrees(app.server.knex, shop.shopId);
+      const tree = await app.server.knex('trees').where({ shop_id: shop.shopId, slug: TREE }).first('id');
 
-      const page = await browser.newPage({ viewport });
+      const page = await app.browser.newPage({ viewport });
       const errors = watchConsole(page);
       await signIn(page, shop.people.lead.email);
-      await page.goto(`${server.url}/trees/${tree.id}`);
+      await page.goto(`${app.server.url}/trees/${tree.id}`);
       await page.getByTestId('tree-authoring').waitFor(WAIT);
       expect(await text(page, 'tree-version')).toContain('Version 1');
       await page.getByTestId('start-draft').click();
@@ -192,18 +181,18 @@ describe('Tree authoring in Chromium', () => {
       await page.close();
 
       // A technician starts a walk: it runs on the new version and reaches the new cause.
-      const api = await signedIn(server.app, shop.people.tech.email);
+      const api = await signedIn(app.server.app, shop.people.tech.email);
       const job = await api.post('/api/jobs').send({ roNumber: `AU-${name}`, customerName: 'Tamsin Reed', install: [{ type: 'throttle_body', text: '' }] });
       expect(job.status).toBe(201);
-      const tech = await browser.newPage({ viewport });
+      const tech = await app.browser.newPage({ viewport });
       const techErrors = watchConsole(tech);
       await signIn(tech, shop.people.tech.email);
       // A technician reads the tree and its history but gets no writing tools.
-      await tech.goto(`${server.url}/trees/${tree.id}`);
+      await tech.goto(`${app.server.url}/trees/${tree.id}`);
       await tech.getByTestId('tree-history-link').waitFor(WAIT);
       expect(await tech.getByTestId('start-draft').count()).toBe(0);
       expect(await tech.getByTestId('retire-tree').count()).toBe(0);
-      await tech.goto(`${server.url}/jobs/${job.body.job.id}`);
+      await tech.goto(`${app.server.url}/jobs/${job.body.job.id}`);
       const pick = tech.getByTestId(`start-walk-${TREE}`).first();
       await pick.waitFor(WAIT);
       expect(await pick.innerText()).toContain('version 2');
@@ -214,16 +203,16 @@ describe('Tree authoring in Chromium', () => {
       expect(await tech.getByTestId('step-title').innerText()).toContain(CAUSE_TITLE);
       await screenshot(tech, `authoring-walk-new-version-${name}`);
       const walkId = Number(new URL(tech.url()).pathname.split('/').pop());
-      const walk = await server.knex('walks as w').join('tree_versions as v', 'v.id', 'w.tree_version_id').where('w.id', walkId).first('v.version');
+      const walk = await app.server.knex('walks as w').join('tree_versions as v', 'v.id', 'w.tree_version_id').where('w.id', walkId).first('v.version');
       expect(walk.version).toBe(2);
       expect(techErrors).toEqual([]);
       await tech.close();
 
       // Back with the lead: the history shows both versions and what changed; the tree page counts the finished walk.
       expect((await api.post(`/api/walks/${walkId}/finish`).send({ outcome: 'fixed' })).status).toBe(200);
-      const lead = await browser.newPage({ viewport });
+      const lead = await app.browser.newPage({ viewport });
       await signIn(lead, shop.people.lead.email);
-      await lead.goto(`${server.url}/trees/${tree.id}/history`);
+      await lead.goto(`${app.server.url}/trees/${tree.id}/history`);
       await lead.getByTestId('diff-view').waitFor(WAIT);
       expect(await text(lead, 'history-version-2')).toContain('Added a cracked-hose answer and cause');
       expect(await text(lead, 'history-version-2')).toContain(`by ${shop.people.lead.name}`);
@@ -231,7 +220,7 @@ describe('Tree authoring in Chromium', () => {
       expect(await text(lead, `diff-step-${FIRST}`)).toContain('+ **Listen with the engine warm** before anything else.');
       expect(await text(lead, `diff-step-${FIRST}`)).toContain(`+ ${ANSWER} → new-cause`);
       await screenshot(lead, `authoring-history-${name}`);
-      await lead.goto(`${server.url}/trees/${tree.id}`);
+      await lead.goto(`${app.server.url}/trees/${tree.id}`);
       await lead.getByTestId('stats-cause-new-cause').waitFor(WAIT);
       expect(await text(lead, 'stats-cause-new-cause')).toContain('1 walk');
       expect(await text(lead, `stats-step-${FIRST}`)).toContain(`${ANSWER}: 1 (100 %)`);

@@ -1,26 +1,14 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser } from 'playwright-core';
-import { DESKTOP, PHONE, launchBrowser, screenshot, watchConsole } from '../support/browser';
-import { startTestServer } from '../support/test-app';
+import { describe, expect, it } from 'vitest';
+import { DESKTOP, PHONE, screenshot, servedAppInChromium, watchConsole } from '../support/browser';
 
 describe('first screen in Chromium', () => {
-  let server: Awaited<ReturnType<typeof startTestServer>>;
-  let browser: Browser;
-
-  beforeAll(async () => {
-    server = await startTestServer();
-    browser = await launchBrowser();
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await server?.close();
-  });
+  const app = servedAppInChromium();
 
   for (const [name, viewport] of [['phone', PHONE], ['desktop', DESKTOP]] as const) {
     it(`sends an anonymous visitor to sign-in, with the product and a connected database, at ${viewport.width}x${viewport.height}`, async () => {
-      const page = await browser.newPage({ viewport });
+      const page = await app.browser.newPage({ viewport });
       const errors = watchConsole(page);
-      await page.goto(server.url + '/');
+      await page.goto(app.server.url + '/');
       // The status panel lives in the sign-in screen's footer.
       await page.getByTestId('status-db-ok').waitFor({ timeout: 30_000 });
       expect(new URL(page.url()).pathname).toBe('/sign-in');

@@ -1,7 +1,6 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { DESKTOP, PHONE, launchBrowser, screenshot, watchConsole } from '../support/browser';
-import { startTestServer } from '../support/test-app';
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { DESKTOP, PHONE, screenshot, servedAppInChromium, watchConsole } from '../support/browser';
 import { createShopWithPeople, TEST_PASSWORD, type TestShop } from '../support/people';
 import { installStockTrees } from '@/server/services/tree-stock';
 import { seedDemoHistory } from '@/server/seeds/demo-history';
@@ -10,26 +9,19 @@ import { presetRange } from '@/components/patterns/format';
 
 /** Patterns in Chromium, on a fresh shop loaded with the demo history generator. */
 describe('Patterns screen in Chromium', () => {
-  let server: Awaited<ReturnType<typeof startTestServer>>;
-  let browser: Browser;
+  const app = servedAppInChromium();
   let shop: TestShop;
   let patterns: ReturnType<typeof createPatternService>;
 
   beforeAll(async () => {
-    server = await startTestServer();
-    browser = await launchBrowser();
-    shop = await createShopWithPeople(server.knex, 'Patterns UI');
-    await installStockTrees(server.knex, shop.shopId);
-    await seedDemoHistory(server.knex, shop.shopId);
-    patterns = createPatternService(server.knex);
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await server?.close();
+    shop = await createShopWithPeople(app.server.knex, 'Patterns UI');
+    await installStockTrees(app.server.knex, shop.shopId);
+    await seedDemoHistory(app.server.knex, shop.shopId);
+    patterns = createPatternService(app.server.knex);
   });
 
   async function signIn(page: Page, email: string) {
-    await page.goto(server.url + '/sign-in');
+    await page.goto(app.server.url + '/sign-in');
     await page.getByTestId('sign-in-email').fill(email);
     await page.getByTestId('sign-in-password').fill(TEST_PASSWORD);
     await page.getByTestId('sign-in-submit').click();
@@ -46,7 +38,7 @@ describe('Patterns screen in Chromium', () => {
       expect(all.totals.finished).toBeGreaterThan(100);
       expect(intake.totals.finished).toBeLessThan(all.totals.finished);
 
-      const page = await browser.newPage({ viewport });
+      const page = await app.browser.newPage({ viewport });
       const errors = watchConsole(page);
       await signIn(page, shop.people.owner.email);
       await page.getByTestId('nav-patterns').click();
@@ -100,20 +92,20 @@ describe('Patterns screen in Chromium', () => {
   }
 
   it('keeps technicians out: no Patterns entry, and the page says whose it is', async () => {
-    const page = await browser.newPage({ viewport: PHONE });
+    const page = await app.browser.newPage({ viewport: PHONE });
     await signIn(page, shop.people.tech.email);
     await page.getByTestId('app-shell').waitFor({ timeout: 30_000 });
     expect(await page.getByTestId('nav-patterns').count()).toBe(0);
-    await page.goto(server.url + '/patterns');
+    await page.goto(app.server.url + '/patterns');
     await page.getByTestId('patterns-error').waitFor({ timeout: 30_000 });
     expect(await page.getByTestId('patterns-error').textContent()).toContain('Patterns are for owners and leads');
     await page.close();
   });
 
   it('says so when a period has no finished walks', async () => {
-    const page = await browser.newPage({ viewport: DESKTOP });
+    const page = await app.browser.newPage({ viewport: DESKTOP });
     await signIn(page, shop.people.lead.email);
-    await page.goto(server.url + '/patterns');
+    await page.goto(app.server.url + '/patterns');
     await page.getByTestId('patterns-results').waitFor({ timeout: 60_000 });
     await page.getByTestId('filter-from').fill('2020-01-06');
     await page.getByTestId('filter-to').fill('2020-02-02');

@@ -1,32 +1,24 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { DESKTOP, PHONE, launchBrowser, screenshot, watchConsole } from '../support/browser';
-import { startTestServer } from '../support/test-app';
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { DESKTOP, PHONE, screenshot, servedAppInChromium, watchConsole } from '../support/browser';
 import { signInThroughScreen } from '../support/sign-in-page';
 import { createShopWithPeople, type TestShop } from '../support/people';
 import { createShopRepository } from '@/server/repositories/shop-repository';
 
 describe('Readings screen in Chromium', () => {
-  let server: Awaited<ReturnType<typeof startTestServer>>;
-  let browser: Browser;
+  const app = servedAppInChromium();
   let shop: TestShop;
 
   beforeAll(async () => {
-    server = await startTestServer();
-    browser = await launchBrowser();
-    shop = await createShopWithPeople(server.knex, 'Readings UI');
+    shop = await createShopWithPeople(app.server.knex, 'Readings UI');
     // A shop up in the hills that reads kPa: the screen should start from these settings.
-    await createShopRepository(server.knex).update(shop.shopId, { altitude_m: 1500, pressure_unit: 'kPa' });
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await server?.close();
+    await createShopRepository(app.server.knex).update(shop.shopId, { altitude_m: 1500, pressure_unit: 'kPa' });
   });
 
-  const signIn = (page: Page, email: string) => signInThroughScreen(page, server.url, email);
+  const signIn = (page: Page, email: string) => signInThroughScreen(page, app.server.url, email);
 
   async function openReadings(page: Page) {
-    await page.goto(server.url + '/readings');
+    await page.goto(app.server.url + '/readings');
     await page.getByTestId('readings-screen').waitFor({ timeout: 30_000 });
     // The shop's altitude and unit arrive from GET /api/shop.
     await expect.poll(() => page.getByTestId('altitude').inputValue(), { timeout: 15_000 }).toBe('1500');
@@ -34,7 +26,7 @@ describe('Readings screen in Chromium', () => {
   }
 
   it('judges a typed vacuum live at 390x844 and shows an impossible value inline', async () => {
-    const page = await browser.newPage({ viewport: PHONE });
+    const page = await app.browser.newPage({ viewport: PHONE });
     const errors = watchConsole(page);
     await signIn(page, shop.people.tech.email);
     await openReadings(page);
@@ -92,7 +84,7 @@ describe('Readings screen in Chromium', () => {
   });
 
   it('lays the form and the verdict side by side at 1280x800', async () => {
-    const page = await browser.newPage({ viewport: DESKTOP });
+    const page = await app.browser.newPage({ viewport: DESKTOP });
     const errors = watchConsole(page);
     await signIn(page, shop.people.support.email);
     await openReadings(page);

@@ -1,7 +1,6 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { DESKTOP, PHONE, launchBrowser, screenshot, watchConsole } from '../support/browser';
-import { startTestServer } from '../support/test-app';
+import { describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { DESKTOP, PHONE, screenshot, servedAppInChromium, watchConsole } from '../support/browser';
 
 // What the pre-rendered sign-in page of public/index.html draws, and the
 // real screen's element for each (components/auth/auth-frame.tsx, sign-in-form.tsx).
@@ -28,24 +27,14 @@ async function boxes(page: Page, selectors: string[]) {
 }
 
 describe('sign-in page drawn before the app loads', () => {
-  let server: Awaited<ReturnType<typeof startTestServer>>;
-  let browser: Browser;
-
-  beforeAll(async () => {
-    server = await startTestServer();
-    browser = await launchBrowser();
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await server?.close();
-  });
+  const app = servedAppInChromium();
 
   for (const [name, viewport] of [['phone', PHONE], ['desktop', DESKTOP]] as const) {
     it(`matches the real sign-in screen, then gives way to it, at ${viewport.width}x${viewport.height}`, async () => {
       // Without the app's JavaScript: only the page's own shell.
-      const bare = await browser.newPage({ viewport });
+      const bare = await app.browser.newPage({ viewport });
       await bare.route('**/_expo/static/**', (route) => route.abort());
-      await bare.goto(server.url + '/sign-in');
+      await bare.goto(app.server.url + '/sign-in');
       await bare.locator('#boot-shell .bs-tagline').waitFor();
       await bare.evaluate(() => document.fonts.ready);
       const shell = await boxes(bare, PARTS.map(([s]) => `#boot-shell ${s}`));
@@ -53,9 +42,9 @@ describe('sign-in page drawn before the app loads', () => {
       await bare.close();
 
       // With it: the real screen takes over, in the same places, and the shell is gone.
-      const page = await browser.newPage({ viewport });
+      const page = await app.browser.newPage({ viewport });
       const errors = watchConsole(page);
-      await page.goto(server.url + '/sign-in');
+      await page.goto(app.server.url + '/sign-in');
       await page.getByTestId('sign-in-form').waitFor();
       await page.locator('#boot-shell').waitFor({ state: 'detached' });
       const real = await boxes(page, PARTS.map(([, a]) => a));
@@ -66,10 +55,10 @@ describe('sign-in page drawn before the app loads', () => {
   }
 
   it('is left hidden on every other address', async () => {
-    const page = await browser.newPage({ viewport: PHONE });
+    const page = await app.browser.newPage({ viewport: PHONE });
     await page.route('**/_expo/static/**', (route) => route.abort());
     for (const path of ['/', '/walks/1', '/sign-up', '/g/some-token']) {
-      await page.goto(server.url + path);
+      await page.goto(app.server.url + path);
       expect(await page.locator('#boot-shell').isVisible(), path).toBe(false);
     }
     await page.close();

@@ -1,37 +1,29 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { DESKTOP, PHONE, launchBrowser, screenshot, watchConsole } from '../support/browser';
-import { startTestServer } from '../support/test-app';
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { DESKTOP, PHONE, screenshot, servedAppInChromium, watchConsole } from '../support/browser';
 import { signInThroughScreen } from '../support/sign-in-page';
 import { createShopWithPeople, type TestShop } from '../support/people';
 import { installStockTrees, loadStockLibrary } from '@/server/services/tree-stock';
 import { SYMPTOM_LABELS } from '@/trees/tree-format';
 
 describe('Trees screens in Chromium', () => {
-  let server: Awaited<ReturnType<typeof startTestServer>>;
-  let browser: Browser;
+  const app = servedAppInChromium();
   let shop: TestShop;
   const library = loadStockLibrary();
 
   beforeAll(async () => {
-    server = await startTestServer();
-    browser = await launchBrowser();
-    shop = await createShopWithPeople(server.knex, 'Trees UI');
-    await installStockTrees(server.knex, shop.shopId, library);
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await server?.close();
+    shop = await createShopWithPeople(app.server.knex, 'Trees UI');
+    await installStockTrees(app.server.knex, shop.shopId, library);
   });
 
-  const signIn = (page: Page, email: string) => signInThroughScreen(page, server.url, email);
+  const signIn = (page: Page, email: string) => signInThroughScreen(page, app.server.url, email);
 
   for (const [name, viewport] of [['phone', PHONE], ['desktop', DESKTOP]] as const) {
     it(`shows the library by symptom, searches it, and opens a tree at ${viewport.width}x${viewport.height}`, async () => {
-      const page = await browser.newPage({ viewport });
+      const page = await app.browser.newPage({ viewport });
       const errors = watchConsole(page);
       await signIn(page, shop.people.tech.email);
-      await page.goto(server.url + '/trees');
+      await page.goto(app.server.url + '/trees');
       await page.getByTestId('trees-results').waitFor({ timeout: 30_000 });
 
       // Every stock tree is listed under its symptom's heading.
@@ -101,12 +93,12 @@ describe('Trees screens in Chromium', () => {
   }
 
   it("says so when a tree id is another shop's or does not exist", async () => {
-    const other = await createShopWithPeople(server.knex, 'Trees UI other');
-    await installStockTrees(server.knex, other.shopId, library);
-    const theirs = (await server.knex('trees').where({ shop_id: other.shopId }).first('id')).id;
-    const page = await browser.newPage({ viewport: PHONE });
+    const other = await createShopWithPeople(app.server.knex, 'Trees UI other');
+    await installStockTrees(app.server.knex, other.shopId, library);
+    const theirs = (await app.server.knex('trees').where({ shop_id: other.shopId }).first('id')).id;
+    const page = await app.browser.newPage({ viewport: PHONE });
     await signIn(page, shop.people.support.email);
-    await page.goto(`${server.url}/trees/${theirs}`);
+    await page.goto(`${app.server.url}/trees/${theirs}`);
     await page.getByTestId('tree-error').waitFor({ timeout: 15_000 });
     expect(await page.getByTestId('tree-error').textContent()).toContain('That tree was not found.');
     await page.close();

@@ -1,39 +1,31 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import sharp from 'sharp';
-import type { Browser, Page } from 'playwright-core';
-import { DESKTOP, PHONE, launchBrowser, screenshot, watchConsole } from '../support/browser';
-import { startTestServer } from '../support/test-app';
+import type { Page } from 'playwright-core';
+import { DESKTOP, PHONE, screenshot, servedAppInChromium, watchConsole } from '../support/browser';
 import { signInThroughScreen } from '../support/sign-in-page';
 import { createShopWithPeople, type TestShop } from '../support/people';
 import { installStockTrees } from '@/server/services/tree-stock';
 
 describe('a job and a walk in Chromium', () => {
-  let server: Awaited<ReturnType<typeof startTestServer>>;
-  let browser: Browser;
+  const app = servedAppInChromium();
   let shop: TestShop;
 
   beforeAll(async () => {
-    server = await startTestServer();
-    browser = await launchBrowser();
-    shop = await createShopWithPeople(server.knex, 'Walk UI');
-    await installStockTrees(server.knex, shop.shopId);
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await server?.close();
+    shop = await createShopWithPeople(app.server.knex, 'Walk UI');
+    await installStockTrees(app.server.knex, shop.shopId);
   });
 
-  const signIn = (page: Page, email: string) => signInThroughScreen(page, server.url, email);
+  const signIn = (page: Page, email: string) => signInThroughScreen(page, app.server.url, email);
   const stepTitle = (page: Page) => page.getByTestId('step-title').innerText();
   const waitForStep = (page: Page, title: string) => page.getByTestId('step-title').filter({ hasText: title }).waitFor({ timeout: 15_000 });
 
   it('creates a job with a VIN, walks a stock tree with readings, a photo and an undo, resumes after a reload, finishes and opens the report (390x844)', async () => {
-    const page = await browser.newPage({ viewport: PHONE });
+    const page = await app.browser.newPage({ viewport: PHONE });
     const errors = watchConsole(page);
     await signIn(page, shop.people.tech.email);
 
     // A new job; the VIN is checked as it is typed (49 CFR 565.15 published examples).
-    await page.goto(server.url + '/jobs');
+    await page.goto(app.server.url + '/jobs');
     await page.getByTestId('job-new').click();
     await page.getByTestId('job-roNumber').fill('RO-7731');
     await page.getByTestId('job-customerName').fill('Morgan Teague');
@@ -141,10 +133,10 @@ describe('a job and a walk in Chromium', () => {
   });
 
   it('shows the jobs as a table on a wide screen and finds one by VIN', async () => {
-    const page = await browser.newPage({ viewport: DESKTOP });
+    const page = await app.browser.newPage({ viewport: DESKTOP });
     const errors = watchConsole(page);
     await signIn(page, shop.people.lead.email);
-    await page.goto(server.url + '/jobs');
+    await page.goto(app.server.url + '/jobs');
     await page.getByTestId('job-table').waitFor({ timeout: 15_000 });
     await page.getByTestId('job-search').fill('118341');
     await page.getByTestId('job-row-RO-7731').waitFor();
@@ -154,11 +146,11 @@ describe('a job and a walk in Chromium', () => {
   });
 
   it('says so, instead of waiting for ever, at an address that names no walk', async () => {
-    const page = await browser.newPage({ viewport: PHONE });
+    const page = await app.browser.newPage({ viewport: PHONE });
     await signIn(page, shop.people.tech.email);
-    await page.goto(server.url + '/walks/not-a-walk');
+    await page.goto(app.server.url + '/walks/not-a-walk');
     await page.getByTestId('walk-error').waitFor({ timeout: 15_000 });
-    await page.goto(server.url + '/walks/999999999');
+    await page.goto(app.server.url + '/walks/999999999');
     await page.getByTestId('walk-error').getByText('That walk was not found.').waitFor({ timeout: 15_000 });
     await page.close();
   });

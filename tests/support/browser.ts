@@ -1,7 +1,9 @@
 /// <reference types="node" />
 import fs from 'node:fs';
 import path from 'node:path';
+import { afterAll, beforeAll } from 'vitest';
 import { chromium, type Browser, type Page } from 'playwright-core';
+import { startTestServer } from './test-app';
 
 export const PHONE = { width: 390, height: 844 } as const;
 export const DESKTOP = { width: 1280, height: 800 } as const;
@@ -23,6 +25,24 @@ export async function launchBrowser(): Promise<Browser> {
       '--disable-sync',
     ],
   });
+}
+
+/**
+ * The served web build and a Chromium for the tests of one describe block:
+ * started before them, closed after them. Read `server` and `browser` inside
+ * hooks and tests (they are set once the block starts).
+ */
+export function servedAppInChromium(): { readonly server: Awaited<ReturnType<typeof startTestServer>>; readonly browser: Browser } {
+  const held = {} as { server: Awaited<ReturnType<typeof startTestServer>>; browser: Browser };
+  beforeAll(async () => {
+    held.server = await startTestServer();
+    held.browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await held.browser?.close();
+    await held.server?.close();
+  });
+  return held;
 }
 
 /** Collects console errors and page errors for a page. */
