@@ -69,7 +69,7 @@ export const stepRowsQuery = (db: Knex, walkId: number) =>
 
 export const toStepRow = (r: WalkStepRow): WalkStepRow => ({ ...r, event: parseJson(r.event) as WalkStepRow['event'], judgement: parseJson(r.judgement) });
 
-export const insertStepQuery = (db: Knex, row: Omit<WalkStepRow, 'user_name'> | Omit<WalkStepRow, 'created_at' | 'user_name'>) =>
+export const insertStepQuery = (db: Knex, row: Omit<WalkStepRow, 'user_name'>) =>
   db('walk_steps').insert({
     ...row,
     event: row.event === null ? null : JSON.stringify(row.event),

@@ -49,23 +49,26 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
   const jobs = createJobRepository(knex);
 
   /**
-   * The parsed document of a walk's version: from memory once parsed (a version
-   * never changes), else read inside the step's own transaction (a second
-   * pooled connection per request could starve the pool under load).
+   * The parsed document of a walk's version: from memory once parsed (a
+   * version never changes), else through `load`. Inside a transaction, load
+   * through it: a second pooled connection per request can starve the pool.
    */
-  async function pinnedDoc(shopId: number, w: WalkRow, tx: WalkAppend): Promise<TreeDoc> {
+  async function pinnedDoc(w: WalkRow, load: () => Promise<PinnedTree | undefined>): Promise<TreeDoc> {
     const cached = docCache.get(w.tree_version_id);
     if (cached) return cached;
-    const tree = toPinned(await tx.first(pinnedVersionQuery(knex, shopId, w.tree_version_id)));
+    const tree = await load();
     if (!tree) throw notFound('The tree version of this walk');
     return parsedDoc(tree);
   }
 
-  // Inside a transaction, pass the transaction: a second pooled connection per request can starve the pool.
-  async function pinned(shopId: number, w: WalkRow, db: Knex = knex): Promise<{ tree: PinnedTree; doc: TreeDoc }> {
+  /** Loads a walk's version inside its append transaction. */
+  const versionIn = (tx: WalkAppend, shopId: number) => async () => toPinned(await tx.first(pinnedVersionQuery(knex, shopId, tx.walk.tree_version_id)));
+
+  /** A walk's version with its facts (title, number) and parsed document, for reading a walk. */
+  async function pinned(shopId: number, w: WalkRow): Promise<{ tree: PinnedTree; doc: TreeDoc }> {
     // The document of a version never changes: once parsed, only the small facts are read again.
     const cached = docCache.get(w.tree_version_id);
-    const tree = cached ? await trees.versionMeta(shopId, w.tree_version_id, db) : await trees.version(shopId, w.tree_version_id, db);
+    const tree = cached ? await trees.versionMeta(shopId, w.tree_version_id) : await trees.version(shopId, w.tree_version_id);
     if (!tree) throw notFound('The tree version of this walk');
     return { tree, doc: cached ?? parsedDoc(tree) };
   }
@@ -127,7 +130,7 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
 
   /** The answer to a retry: the record as first stored, and where the walk stands now. */
   async function retried(tx: WalkAppend, actor: Actor, seen: WalkStepRow): Promise<WalkStepAnswer> {
-    const position = positionOf(await pinnedDoc(actor.shopId, tx.walk, tx), tx.steps, contextOf(tx.walk));
+    const position = positionOf(await pinnedDoc(tx.walk, versionIn(tx, actor.shopId)), tx.steps, contextOf(tx.walk));
     return { step: toStepRecord(seen, effectiveSteps(tx.steps).undone), position };
   }
 
@@ -202,7 +205,7 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
         if (seen) return retried(tx, actor, seen);
         if (w.status !== 'open') throw finishedRefusal();
         if (cap && steps.length >= cap.max) throw cap.refusal();
-        const doc = await pinnedDoc(actor.shopId, w, tx);
+        const doc = await pinnedDoc(w, versionIn(tx, actor.shopId));
         const events = liveEvents(steps);
         // One replay: the engine returns the path, whose last two steps are where the answer was given and where it leads.
         const result = fitted(() => applyEvent(doc, events, input.event, contextOf(w)));
@@ -247,7 +250,7 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
         if (seen) return retried(tx, actor, seen);
         if (w.status !== 'open') throw finishedRefusal();
         if (cap && steps.length >= cap.max) throw cap.refusal();
-        const doc = await pinnedDoc(actor.shopId, w, tx);
+        const doc = await pinnedDoc(w, versionIn(tx, actor.shopId));
         const { live } = effectiveSteps(steps);
         const last = live.at(-1);
         if (!last) throw conflict('There is nothing to undo: this walk is at its first step.');
@@ -280,7 +283,7 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
       await knex.transaction(async (trx) => {
         const w = await findOpenLocked(trx, actor, walkId);
         if (w.status !== 'open') throw finishedRefusal();
-        const { doc } = await pinned(actor.shopId, w, trx);
+        const doc = await pinnedDoc(w, () => trees.version(actor.shopId, w.tree_version_id, trx));
         const steps = await walks.steps(w.id, trx);
         const pos = positionOf(doc, steps, contextOf(w));
         const meta = doc.machine.states[pos.stepId].meta;
@@ -311,7 +314,7 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
       const w = await walks.find(actor.shopId, walkId);
       if (!w) throw notFound('That walk');
       if (w.status !== 'open') throw finishedRefusal();
-      const { doc } = await pinned(actor.shopId, w);
+      const doc = await pinnedDoc(w, () => trees.version(actor.shopId, w.tree_version_id));
       if (!doc.machine.states[fields.step]) throw badRequest(`This tree has no step "${fields.step}".`, { fields: { step: 'Unknown step.' } });
       const saved = await photos.save(actor.shopId, actor.id, bytes, async (trx, photoId) => {
         const locked = await findOpenLocked(trx, actor, walkId);
