@@ -4,6 +4,7 @@ import path from 'node:path';
 import zlib from 'node:zlib';
 import { promisify } from 'node:util';
 import type { RequestHandler } from 'express';
+import { preferredEncoding } from './content-encoding';
 
 const brotli = promisify(zlib.brotliCompress);
 const gzip = promisify(zlib.gzip);
@@ -92,7 +93,7 @@ export function compressedAssets(distDir: string): RequestHandler {
     if ((req.method !== 'GET' && req.method !== 'HEAD') || !COMPRESSIBLE.test(req.path)) return next();
     if (!req.path.startsWith('/_expo/static/') && !req.path.startsWith('/assets/')) return next();
     // Brotli whenever the browser lists it (browsers list gzip first at equal weight), else gzip.
-    const encoding = req.acceptsEncodings('br') === 'br' ? 'br' : req.acceptsEncodings('gzip') === 'gzip' ? 'gzip' : undefined;
+    const encoding = preferredEncoding(req);
     if (!encoding) return next();
     let file: string;
     try {

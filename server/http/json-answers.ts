@@ -3,6 +3,7 @@ import crypto from 'node:crypto';
 import zlib from 'node:zlib';
 import { promisify } from 'node:util';
 import type { Request, Response } from 'express';
+import { preferredEncoding } from './content-encoding';
 
 /**
  * How API answers go out as JSON. Browsers get answers of some size
@@ -15,22 +16,21 @@ const COMPRESS_FROM_BYTES = 4096;
 const brotli = promisify(zlib.brotliCompress);
 const gzip = promisify(zlib.gzip);
 
-/** The encoding a browser takes, Brotli first (browsers list gzip first at equal weight). */
-function encodingFor(req: Request): 'br' | 'gzip' | undefined {
-  return req.acceptsEncodings('br') === 'br' ? 'br' : req.acceptsEncodings('gzip') === 'gzip' ? 'gzip' : undefined;
-}
+/** Brotli at quality 5 and gzip at level 6: most of the saving for little work. */
+const brotliOptions = (bytes: Buffer) => ({ params: { [zlib.constants.BROTLI_PARAM_QUALITY]: 5, [zlib.constants.BROTLI_PARAM_SIZE_HINT]: bytes.length } });
+const GZIP_OPTIONS = { level: 6 };
 
 /** Sends an answer made for this request: compressed when large enough and the browser takes it. */
 export async function sendJsonAnswer(req: Request, res: Response, answer: unknown) {
   const text = Buffer.from(JSON.stringify(answer));
-  const encoding = text.length >= COMPRESS_FROM_BYTES ? encodingFor(req) : undefined;
+  const encoding = text.length >= COMPRESS_FROM_BYTES ? preferredEncoding(req) : undefined;
   res.type('json').vary('Accept-Encoding');
   if (!encoding) {
     res.send(text);
     return;
   }
-  // Quality 5 and level 6: most of the saving for little work, off the main thread.
-  const body = encoding === 'br' ? await brotli(text, { params: { [zlib.constants.BROTLI_PARAM_QUALITY]: 5, [zlib.constants.BROTLI_PARAM_SIZE_HINT]: text.length } }) : await gzip(text, { level: 6 });
+  // Off the main thread: an answer made for one request is compressed once.
+  const body = encoding === 'br' ? await brotli(text, brotliOptions(text)) : await gzip(text, GZIP_OPTIONS);
   res.set('Content-Encoding', encoding).send(body);
 }
 
@@ -60,11 +60,8 @@ function compressedCopies({ body, etag }: Kept) {
   if (hit) {
     compressed.delete(etag);
   } else {
-    // Moderate settings: a page is compressed once per content, in line with a request.
-    hit = {
-      br: zlib.brotliCompressSync(body, { params: { [zlib.constants.BROTLI_PARAM_QUALITY]: 6, [zlib.constants.BROTLI_PARAM_SIZE_HINT]: body.length } }),
-      gzip: zlib.gzipSync(body, { level: 6 }),
-    };
+    // Once per content, in line with the request that first needs it.
+    hit = { br: zlib.brotliCompressSync(body, brotliOptions(body)), gzip: zlib.gzipSync(body, GZIP_OPTIONS) };
     if (compressed.size >= MAX_COMPRESSED) compressed.delete(compressed.keys().next().value!);
   }
   compressed.set(etag, hit);
@@ -86,7 +83,7 @@ export function sendKeptJson(req: Request, res: Response, answer: object) {
     return;
   }
   // Made once per content, so even small kept answers are worth compressing.
-  const encoding = kept.body.length < 1024 ? undefined : encodingFor(req);
+  const encoding = kept.body.length < 1024 ? undefined : preferredEncoding(req);
   if (!encoding) {
     res.send(kept.body);
     return;

@@ -3,6 +3,7 @@ import path from 'node:path';
 import zlib from 'node:zlib';
 import express, { type Express } from 'express';
 import { compressedAssets } from './compressed-assets';
+import { preferredEncoding } from './content-encoding';
 
 /** Paths whose page shows the pre-rendered sign-in shell of public/index.html until the app mounts. */
 const SHELL_PATHS = new Set(['/sign-in', '/sign-in/']);
@@ -51,7 +52,7 @@ export function mountStaticSite(app: Express, distDir: string) {
       res.type('html');
       // The page (about 7 KB with the shell's styles) is the first thing a phone waits for: compress it too.
       const body = Buffer.from(pageHtml(html, req.path));
-      const encoding = req.acceptsEncodings('br') === 'br' ? 'br' : req.acceptsEncodings('gzip') === 'gzip' ? 'gzip' : undefined;
+      const encoding = preferredEncoding(req);
       if (!encoding) return void res.send(body);
       res.setHeader('Content-Encoding', encoding);
       res.send(encoding === 'br' ? zlib.brotliCompressSync(body) : zlib.gzipSync(body));
