@@ -31,6 +31,18 @@ export function toPinned(r: PinnedRow | undefined): PinnedTree | undefined {
   return { treeId: r.tree_id, versionId: r.version_id, version: r.version, title, symptom: r.symptom, doc };
 }
 
+type MetaRow = { version_id: number; tree_id: number; version: number; title: string; symptom: string; doc_title: string | null };
+
+/** Versions of the shop without their documents; the pinned document's own title is read in the database. */
+const metaQuery = (db: Knex, shopId: number) =>
+  db('tree_versions as v')
+    .join('trees as t', 't.id', 'v.tree_id')
+    .where('t.shop_id', shopId)
+    .andWhere('v.shop_id', shopId)
+    .select('v.id as version_id', 'v.tree_id', 'v.version', 't.title', 't.symptom', db.raw("JSON_VALUE(v.doc, '$.title') as doc_title"));
+
+const toMeta = (r: MetaRow): PinnedTree => ({ treeId: r.tree_id, versionId: r.version_id, version: r.version, title: r.doc_title ?? r.title, symptom: r.symptom, doc: null });
+
 /**
  * Reads the tree library's tables for walks: the latest published version of
  * a tree (to pin at start) and a pinned version by id. Scoped by shop.
@@ -48,13 +60,14 @@ export function createWalkTreeRepository(knex: Knex) {
      * in the database): for callers that already hold the parsed document.
      */
     async versionMeta(shopId: number, versionId: number, db: Knex = knex): Promise<PinnedTree | undefined> {
-      const r = await db('tree_versions as v')
-        .join('trees as t', 't.id', 'v.tree_id')
-        .where('t.shop_id', shopId)
-        .andWhere('v.id', versionId)
-        .andWhere('v.shop_id', shopId)
-        .first('v.id as version_id', 'v.tree_id', 'v.version', 't.title', 't.symptom', db.raw("JSON_VALUE(v.doc, '$.title') as doc_title"));
-      return r && { treeId: r.tree_id, versionId: r.version_id, version: r.version, title: r.doc_title ?? r.title, symptom: r.symptom, doc: null };
+      const r: MetaRow | undefined = await metaQuery(db, shopId).andWhere('v.id', versionId).first();
+      return r && toMeta(r);
+    },
+    /** Several versions without their documents in one read (a job's walks list), by version id. */
+    async versionsMeta(shopId: number, versionIds: readonly number[]): Promise<Map<number, PinnedTree>> {
+      if (versionIds.length === 0) return new Map();
+      const rows: MetaRow[] = await metaQuery(knex, shopId).whereIn('v.id', [...new Set(versionIds)]);
+      return new Map(rows.map((r) => [r.version_id, toMeta(r)]));
     },
     /** A pinned version by id, whatever has been published since. */
     async version(shopId: number, versionId: number, db: Knex = knex): Promise<PinnedTree | undefined> {

@@ -187,9 +187,13 @@ export function createWalkService(knex: Knex, photos: PhotoService) {
     async listForJob(shopId: number, jobId: number): Promise<WalkSummary[]> {
       if (!(await jobs.findById(shopId, jobId))) throw notFound('That job');
       const rows = await walks.listForJob(shopId, jobId);
-      const out: WalkSummary[] = [];
-      for (const w of rows) out.push(toWalkSummary(w, (await pinned(shopId, w)).tree));
-      return out;
+      // One read for the versions of all the walks, not one per walk.
+      const versions = await trees.versionsMeta(shopId, rows.map((w) => w.tree_version_id));
+      return rows.map((w) => {
+        const tree = versions.get(w.tree_version_id);
+        if (!tree) throw notFound('The tree version of this walk');
+        return toWalkSummary(w, tree);
+      });
     },
 
     /**

@@ -225,4 +225,33 @@ describe('walks API', () => {
     expect(res.body.items.length).toBeGreaterThan(3);
     expect(res.body.items[0].tree.title).toBeTruthy();
   });
+
+  it("reads the tree versions of a job's walks list in one query however many walks it has", async () => {
+    const fuel = await t.knex('trees').where({ shop_id: ctx.shop.shopId, slug: 'hiss-at-idle' }).first('id', 'title');
+    const job = await ctx.tech.post('/api/jobs').send({ roNumber: `Q-${uuid().slice(0, 8)}`, customerName: 'Ash Vale', install: [] });
+    const jobId = job.body.job.id as number;
+    // Only reads of tree versions are counted: the session and user reads come and go with their one-second cache.
+    const queriesToList = async () => {
+      let n = 0;
+      const count = (q: { sql: string }) => void (q.sql.includes('tree_versions') && n++);
+      t.knex.on('query', count);
+      try {
+        const res = await ctx.tech.get(`/api/jobs/${jobId}/walks`);
+        expect(res.status).toBe(200);
+        return { n, items: res.body.items as { tree: { id: number; title: string } }[] };
+      } finally {
+        t.knex.off('query', count);
+      }
+    };
+    await startWalk(ctx.tech, jobId, ctx.treeId);
+    const one = await queriesToList();
+    expect(one.items).toHaveLength(1);
+    for (const treeId of [ctx.treeId, fuel.id, fuel.id]) await startWalk(ctx.tech, jobId, treeId);
+    const four = await queriesToList();
+    expect(four.items).toHaveLength(4);
+    expect(one.n).toBe(1);
+    expect(four.n).toBe(1);
+    // Each walk still names its own tree.
+    expect(four.items.filter((w) => w.tree.id === fuel.id).map((w) => w.tree.title)).toEqual([fuel.title, fuel.title]);
+  });
 });
