@@ -54,12 +54,13 @@ export function WalkScreen({ source }: { source: WalkSource }) {
     <Screen testID="walk-screen">
       <WalkHeader walk={w} />
       <WalkProgress position={w.position} />
-      {finished ? null : (
+      {/* Only once there is an answer to take back: at the first step a dead button would sit where the step starts. */}
+      {finished || w.position.stepsTaken === 0 ? null : (
         <View style={styles.row}>
           <Button
             label="‹ Back: undo last answer"
             kind="secondary"
-            disabled={w.position.stepsTaken === 0 || sender.busy}
+            disabled={sender.busy}
             onPress={() => void sender.undo()}
             testID="walk-back"
           />

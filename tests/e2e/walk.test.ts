@@ -50,6 +50,8 @@ describe('a job and a walk in Chromium', () => {
     const walkUrl = page.url();
     await waitForStep(page, 'Read total fuel trim at idle');
     await screenshot(page, 'walk-step-phone');
+    // Nothing to take back yet: no Back button until the first answer.
+    expect(await page.getByTestId('walk-back').count()).toBe(0);
 
     // Cautions come before the question.
     const caution = await page.getByTestId('step-cautions').boundingBox();
@@ -65,6 +67,7 @@ describe('a job and a walk in Chromium', () => {
     await screenshot(page, 'walk-reading-phone');
     await page.getByTestId('reading-submit').click();
     await waitForStep(page, '2 500');
+    await page.getByTestId('walk-back').waitFor();
 
     // A photo at this step, through the web file chooser.
     const jpeg = await sharp({ create: { width: 640, height: 480, channels: 3, background: '#44617a' } }).jpeg().toBuffer();
