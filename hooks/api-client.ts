@@ -17,6 +17,18 @@ export class ApiError extends Error {
 }
 
 /**
+ * Whether asking again can help: no answer (offline, server down or timed
+ * out) or the server failing. A refusal (not signed in, not allowed, not
+ * found, bad input, a limit reached) answers the same the next time.
+ */
+export function canRetry(error: unknown): boolean {
+  // No error at all: nothing was asked (an address that names nothing).
+  if (!error) return false;
+  if (!(error instanceof ApiError)) return true;
+  return error.status === 0 || error.status === 408 || error.status >= 500;
+}
+
+/**
  * Calls the API on the same origin with the session cookie. Non-2xx answers
  * become ApiError; a network failure becomes ApiError with status 0.
  * `acceptStatuses` lets a caller read a JSON body on a non-2xx answer (health's 503).

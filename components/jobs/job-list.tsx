@@ -11,6 +11,7 @@ import { TextField } from '@/components/forms/text-field';
 import { useDebouncedValue } from '@/components/trees/use-debounced-value';
 import { colors, fonts, radius, space, touchTarget, type, wideBreakpoint } from '@/components/theme';
 import { shortDate, vehicleLine } from './job-vehicle';
+import { LoadError } from '@/components/load-error';
 
 const PAGE_SIZE = 20;
 
@@ -51,12 +52,7 @@ export function JobList() {
           <ThemedText muted>Loading jobs…</ThemedText>
         </View>
       ) : jobs.isError ? (
-        <View style={styles.col}>
-          <Notice tone="error" title="Could not load the jobs">
-            {jobs.error.message}
-          </Notice>
-          <Button label="Try again" kind="secondary" onPress={() => void jobs.refetch()} />
-        </View>
+        <LoadError title="Could not load the jobs" error={jobs.error} onRetry={jobs.refetch} busy={jobs.isFetching} />
       ) : jobs.data.items.length === 0 ? (
         <Notice tone="info" title={q ? 'No job matches' : 'No jobs yet'} testID="jobs-empty">
           {q ? `Nothing matches “${q}”. Check the RO number or VIN, or search by the customer's name.` : 'Create the first job for a car that came back after an install.'}

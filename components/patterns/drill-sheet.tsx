@@ -3,10 +3,9 @@ import { Link } from 'expo-router';
 import { WALK_OUTCOME_LABELS } from '@/shared/schemas/walks';
 import type { PatternWalk } from '@/shared/schemas/patterns';
 import { usePatternDrill, type PatternDrillInput, type PatternFilterInput } from '@/hooks/use-patterns';
-import { Notice } from '@/components/notice';
-import { Button } from '@/components/button';
 import { colors, fonts, maxContentWidth, radius, space, touchTarget, type } from '@/components/theme';
 import { day, duration } from './format';
+import { LoadError } from '@/components/load-error';
 
 const OUTCOME_ICON = { fixed: '✔', not_fixed: '✖', referred: '➜' } as const;
 
@@ -31,12 +30,7 @@ export function DrillSheet({ filters, drill, onClose }: { filters: PatternFilter
               <Text style={styles.muted}>Finding the walks…</Text>
             </View>
           ) : query.isError ? (
-            <View style={styles.gap}>
-              <Notice tone="error" title="Could not load the walks">
-                {query.error.message}
-              </Notice>
-              <Button label="Try again" kind="secondary" onPress={() => void query.refetch()} />
-            </View>
+            <LoadError title="Could not load the walks" error={query.error} onRetry={query.refetch} busy={query.isFetching} />
           ) : (
             <ScrollView contentContainerStyle={styles.list} testID="drill-list">
               <Text style={styles.muted} testID="drill-count">

@@ -17,6 +17,7 @@ import { DataTable } from './data-table';
 import { DrillSheet } from './drill-sheet';
 import { causeColumns, comebackColumns, repeatColumns, TableSection, timeColumns, unresolvedColumns, weekColumns } from './pattern-tables';
 import { day, percent, presetRange } from './format';
+import { LoadError } from '@/components/load-error';
 
 /** The Patterns screen: filters, figures, charts and sortable tables of the shop's finished walks, with drill-down to the walks. */
 export function PatternsScreen() {
@@ -42,12 +43,13 @@ export function PatternsScreen() {
           <ThemedText muted>Counting the shop's walks…</ThemedText>
         </View>
       ) : report.isError ? (
-        <View style={styles.col} testID="patterns-error">
-          <Notice tone="error" title={report.error instanceof ApiError && report.error.status === 403 ? 'Patterns are for owners and leads' : 'Could not load the figures'}>
-            {report.error.message}
-          </Notice>
-          <Button label="Try again" kind="secondary" onPress={() => void report.refetch()} busy={report.isFetching} />
-        </View>
+        <LoadError
+          title={report.error instanceof ApiError && report.error.status === 403 ? 'Patterns are for owners and leads' : 'Could not load the figures'}
+          error={report.error}
+          onRetry={report.refetch}
+          busy={report.isFetching}
+          testID="patterns-error"
+        />
       ) : (
         <Body report={report.data} wide={wide} updating={report.isPlaceholderData} onDrill={setDrill} onClear={() => setFilters(presetRange('26w'))} />
       )}

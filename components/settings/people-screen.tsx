@@ -1,8 +1,6 @@
 import { ActivityIndicator, StyleSheet, Text, View, useWindowDimensions } from 'react-native';
 import { usePeople } from '@/hooks/use-people';
 import { useMe } from '@/hooks/use-session';
-import { Button } from '@/components/button';
-import { Notice } from '@/components/notice';
 import { Screen } from '@/components/screen';
 import { ThemedText } from '@/components/themed-text';
 import { colors, fonts, radius, space, wideBreakpoint } from '@/components/theme';
@@ -10,6 +8,7 @@ import { InviteForm } from './invite-form';
 import { InvitationsList } from './invitations-list';
 import { COLUMNS, PersonRow } from './person-row';
 import { SettingsNav } from './settings-nav';
+import { LoadError } from '@/components/load-error';
 
 /** Settings → People (owner): everyone in the shop, invitations, roles and (de)activation. */
 export function PeopleScreen() {
@@ -26,12 +25,7 @@ export function PeopleScreen() {
       </ThemedText>
       {people.isPending ? <ActivityIndicator color={colors.accent} /> : null}
       {people.isError ? (
-        <View style={styles.col}>
-          <Notice tone="error" title="People not loaded">
-            {people.error.message}
-          </Notice>
-          <Button label="Try again" kind="secondary" onPress={() => void people.refetch()} />
-        </View>
+        <LoadError title="People not loaded" error={people.error} onRetry={people.refetch} busy={people.isFetching} />
       ) : null}
       {people.data ? (
         <View style={styles.list} testID={wide ? 'people-table' : 'people-list'} accessibilityRole={wide ? undefined : 'list'}>

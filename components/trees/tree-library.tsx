@@ -14,6 +14,7 @@ import { TreeCard } from './tree-card';
 import { groupBySymptom } from './group-trees';
 import { useDebouncedValue } from './use-debounced-value';
 import { LibraryAuthoring } from '@/components/authoring/library-authoring';
+import { LoadError } from '@/components/load-error';
 
 /** The Trees screen: the shop's library by symptom, with a text search and install-type chips. */
 export function TreeLibrary() {
@@ -56,12 +57,7 @@ function Results({ query, text, installType, onClear }: { query: ReturnType<type
   }
   if (query.isError) {
     return (
-      <View style={styles.col} testID="trees-error">
-        <Notice tone="error" title="Could not load the trees">
-          {query.error.message}
-        </Notice>
-        <Button label="Try again" kind="secondary" onPress={() => void query.refetch()} busy={query.isFetching} />
-      </View>
+      <LoadError title="Could not load the trees" error={query.error} onRetry={query.refetch} busy={query.isFetching} testID="trees-error" />
     );
   }
   const groups = groupBySymptom(query.data.trees);

@@ -6,12 +6,12 @@ import { useTree } from '@/hooks/use-trees';
 import { Screen } from '@/components/screen';
 import { ThemedText } from '@/components/themed-text';
 import { Notice } from '@/components/notice';
-import { Button } from '@/components/button';
 import { colors, fonts, space, touchTarget, type, wideBreakpoint } from '@/components/theme';
 import { StepList } from './step-list';
 import { CauseList } from './cause-list';
 import { TreeAuthoringBar } from '@/components/authoring/tree-authoring-bar';
 import { TreeStatsPanel } from '@/components/authoring/tree-stats-panel';
+import { LoadError } from '@/components/load-error';
 
 /** One tree: what it is for, its published version, its steps in walk order and the causes it can reach. */
 export function TreePage({ id }: { id: number }) {
@@ -29,12 +29,7 @@ export function TreePage({ id }: { id: number }) {
           <ThemedText muted>Loading the tree…</ThemedText>
         </View>
       ) : tree.isError || !tree.data ? (
-        <View style={styles.col} testID="tree-error">
-          <Notice tone="error" title="Could not open this tree">
-            {tree.error?.message ?? 'That tree was not found.'}
-          </Notice>
-          {tree.error ? <Button label="Try again" kind="secondary" onPress={() => void tree.refetch()} busy={tree.isFetching} /> : null}
-        </View>
+        <LoadError title="Could not open this tree" error={tree.error ?? new Error('That tree was not found.')} onRetry={tree.refetch} busy={tree.isFetching} testID="tree-error" />
       ) : (
         <TreeBody detail={tree.data} />
       )}

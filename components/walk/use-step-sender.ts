@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { ApiError } from '@/hooks/api-client';
+import { canRetry } from '@/hooks/api-client';
 import { newStepId, type WalkSource } from './walk-source';
 
 type Pending = { kind: 'step'; stepId: string; event: unknown; note: string | null; words: string } | { kind: 'undo'; stepId: string; words: string };
@@ -22,8 +22,7 @@ export function useStepSender(source: WalkSource) {
       setPending(null);
       return true;
     } catch (err) {
-      const status = err instanceof ApiError ? err.status : 0;
-      const retryable = status === 0 || status >= 500;
+      const retryable = canRetry(err);
       setError({ message: err instanceof Error ? err.message : 'That did not work.', retryable });
       if (!retryable) setPending(null);
       else setPending(p);

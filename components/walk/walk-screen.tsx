@@ -14,6 +14,7 @@ import { WalkProgress } from './walk-progress';
 import { WalkHistory } from './walk-history';
 import { StepView } from './step-view';
 import { useStepSender } from './use-step-sender';
+import { LoadError } from '@/components/load-error';
 
 /**
  * The walk screen body: one step at a time, with state from the server (so a
@@ -39,10 +40,7 @@ export function WalkScreen({ source }: { source: WalkSource }) {
   if (!source.data) {
     return (
       <Screen testID="walk-error">
-        <Notice tone="error" title="Could not open the walk">
-          {source.error?.message ?? 'The walk could not be loaded.'}
-        </Notice>
-        <Button label="Try again" kind="secondary" onPress={source.refetch} />
+        <LoadError title="Could not open the walk" error={source.error ?? new Error('That address names no walk.')} onRetry={source.refetch} />
       </Screen>
     );
   }

@@ -99,6 +99,8 @@ describe('Patterns screen in Chromium', () => {
     await page.goto(app.server.url + '/patterns');
     await page.getByTestId('patterns-error').waitFor({ timeout: 30_000 });
     expect(await page.getByTestId('patterns-error').textContent()).toContain('Patterns are for owners and leads');
+    // A refusal answers the same the next time: nothing offers to ask again.
+    expect(await page.getByTestId('load-retry').count()).toBe(0);
     await page.close();
   });
 

@@ -152,9 +152,11 @@ describe('a job and a walk in Chromium', () => {
     const page = await app.browser.newPage({ viewport: PHONE });
     await signIn(page, shop.people.tech.email);
     await page.goto(app.server.url + '/walks/not-a-walk');
-    await page.getByTestId('walk-error').waitFor({ timeout: 15_000 });
+    await page.getByTestId('walk-error').getByText('That address names no walk.').waitFor({ timeout: 15_000 });
     await page.goto(app.server.url + '/walks/999999999');
     await page.getByTestId('walk-error').getByText('That walk was not found.').waitFor({ timeout: 15_000 });
+    // Asking again would get the same answer: no "Try again" for a walk that does not exist.
+    expect(await page.getByTestId('load-retry').count()).toBe(0);
     await page.close();
   });
 });
