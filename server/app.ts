@@ -1,4 +1,4 @@
-import express, { type RequestHandler } from 'express';
+import express, { type Request, type RequestHandler, type Response } from 'express';
 import type { PassportStatic } from 'passport';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
@@ -11,6 +11,7 @@ import { mountRoutes } from './http/route-table';
 import { accessGuard } from './http/access';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { mountStaticSite } from './http/static-site';
+import { walkPagePaint } from './http/walk-page-paint';
 import { mountDevMail } from './routes/dev-mail-routes';
 import { sessionMiddleware } from './auth/session';
 import { createPassport } from './auth/passport-setup';
@@ -80,7 +81,11 @@ export function createApp(deps: AppDeps) {
 
   // The caught-mail pages exist only outside production.
   if (!config.production) mountDevMail(app, config.mailDir);
-  if (deps.serveWeb) mountStaticSite(app, config.distDir);
+  if (deps.serveWeb) {
+    // A walk's page comes with its step drawn (server/http/walk-page-paint.ts): the same session check as the API.
+    const session = (req: Request, res: Response) => new Promise<void>((resolve) => runAll(withSession, req, res, () => resolve()));
+    mountStaticSite(app, config.distDir, walkPagePaint(services, session));
+  }
   app.use(errorHandler);
   return { app, services, logger };
 }

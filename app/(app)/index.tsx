@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { Redirect } from 'expo-router';
 import { useMe } from '@/hooks/use-session';
-import { homeFor } from '@/components/nav/nav-items';
+import { homeFor } from '@/shared/nav-items';
 import { safeNext } from '@/components/auth/gate-rules';
 import { takeDeepLink } from '@/components/auth/deep-link';
 

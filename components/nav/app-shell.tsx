@@ -5,7 +5,7 @@ import { ROLE_LABELS } from '@/shared/roles';
 import type { Me } from '@/shared/schemas/auth';
 import { useSignOut } from '@/hooks/use-session';
 import { colors, fonts, space, touchTarget, type, wideBreakpoint } from '@/components/theme';
-import { activeItem, navItemsFor, type NavItem } from './nav-items';
+import { activeItem, navItemsFor, type NavItem } from '@/shared/nav-items';
 import { NavIcon } from './nav-icon';
 
 /**

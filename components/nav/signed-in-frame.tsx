@@ -1,7 +1,8 @@
 import { useDeferredValue, type ReactNode } from 'react';
 import { ActivityIndicator, StyleSheet, View } from 'react-native';
 import { useSession } from '@/hooks/use-session';
-import { useDismissBootShell } from '@/components/boot-shell';
+import { usePathname } from 'expo-router';
+import { isWalkPath, useDismissBootShell } from '@/components/boot-shell';
 import { Button } from '@/components/button';
 import { Notice } from '@/components/notice';
 import { colors, space } from '@/components/theme';
@@ -14,8 +15,9 @@ import { AppShell } from './app-shell';
  */
 export function SignedInFrame({ children }: { children: ReactNode }) {
   const session = useSession();
-  // A signed-in person who opened /sign-in: the gate moves them here.
-  useDismissBootShell();
+  // A signed-in person who opened /sign-in: the gate moves them here. A walk's
+  // first paint stays for the walk screen, unless the frame cannot show it.
+  useDismissBootShell(isWalkPath(usePathname()) && !session.isError);
   // The shell and the first screen are rendered as a deferred update once the
   // person is known, in slices rather than as one long task (see walk-screen.tsx).
   const shellReady = useDeferredValue(!!session.data);

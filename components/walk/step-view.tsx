@@ -5,6 +5,7 @@ import type { WalkDetail } from '@/shared/schemas/walks';
 import { TextField } from '@/components/forms/text-field';
 import { Button } from '@/components/button';
 import { colors, fonts, radius, space, type } from '@/components/theme';
+import { STEP_KIND_WORDS } from '@/shared/walk-words';
 import type { WalkSource } from './walk-source';
 import type { useStepSender } from './use-step-sender';
 import { CautionPanel } from './caution-panel';
@@ -14,7 +15,6 @@ import { ReadingForm } from './reading-form';
 import { PhotoPanel } from './photo-panel';
 import { FinishPanel } from './finish-panel';
 
-const KIND_WORDS = { ask: 'Check', reading: 'Measure', action: 'Do', cause: 'Cause found', refer: 'Hand over' } as const;
 
 interface Props {
   walk: WalkDetail;
@@ -37,7 +37,7 @@ export function StepView({ walk, source, sender, answers }: Props) {
       <CautionPanel cautions={meta.cautions} />
       <View style={styles.card}>
         <Text style={styles.kind}>
-          {final ? '■' : '●'} {KIND_WORDS[meta.kind]} · step {walk.position.stepsTaken + 1}
+          {final ? '■' : '●'} {STEP_KIND_WORDS[meta.kind]} · step {walk.position.stepsTaken + 1}
         </Text>
         <Text style={styles.title} accessibilityRole="header" testID="step-title">
           {meta.title}

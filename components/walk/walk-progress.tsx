@@ -1,36 +1,28 @@
 import { StyleSheet, Text, View } from 'react-native';
 import type { WalkPosition } from '@/shared/schemas/walks';
+import { walkProgress } from '@/shared/walk-words';
 import { colors, fonts, space, type } from '@/components/theme';
 
 /** Steps taken and the shortest way left to a cause, in words and as a bar. */
 export function WalkProgress({ position }: { position: WalkPosition }) {
-  const left = position.shortestToCause;
-  const taken = position.stepsTaken;
-  const fraction = position.final ? 1 : left === null ? 0 : taken / (taken + left);
-  const words = position.final
-    ? 'End of the tree reached'
-    : left === null
-      ? 'No cause can be reached from here'
-      : `At least ${left} more ${left === 1 ? 'answer' : 'answers'} to a cause`;
+  const { taken, words, percent } = walkProgress(position);
   return (
     <View
       style={styles.wrap}
       testID="walk-progress"
       role="progressbar"
       // react-native-web maps aria-* props (not accessibilityValue): a progress bar needs a name and its values.
-      aria-label={`Progress: ${taken} ${taken === 1 ? 'answer' : 'answers'} so far. ${words}`}
+      aria-label={`Progress: ${taken}. ${words}`}
       aria-valuemin={0}
       aria-valuemax={100}
-      aria-valuenow={Math.round(fraction * 100)}
+      aria-valuenow={percent}
     >
       <Text style={styles.text}>
-        <Text style={styles.strong}>
-          {taken} {taken === 1 ? 'answer' : 'answers'} so far
-        </Text>
+        <Text style={styles.strong}>{taken}</Text>
         {` · ${words}`}
       </Text>
       <View style={styles.bar}>
-        <View style={[styles.fill, { width: `${Math.round(fraction * 100)}%` }]} />
+        <View style={[styles.fill, { width: `${percent}%` }]} />
       </View>
     </View>
   );

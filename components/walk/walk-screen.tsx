@@ -4,6 +4,7 @@ import { router } from 'expo-router';
 import { availableAnswers } from '@/trees/engine';
 import type { WalkDetail } from '@/shared/schemas/walks';
 import { WALK_OUTCOME_LABELS } from '@/shared/schemas/walks';
+import { walkJobLine } from '@/shared/walk-words';
 import { Screen } from '@/components/screen';
 import { ThemedText } from '@/components/themed-text';
 import { Notice } from '@/components/notice';
@@ -15,6 +16,7 @@ import { WalkHistory } from './walk-history';
 import { StepView } from './step-view';
 import { useStepSender } from './use-step-sender';
 import { LoadError } from '@/components/load-error';
+import { useDismissWalkShell } from '@/components/boot-shell';
 
 /**
  * The walk screen body: one step at a time, with state from the server (so a
@@ -28,8 +30,11 @@ export function WalkScreen({ source }: { source: WalkSource }) {
   // data lands, React renders it as a deferred update, in slices, instead of
   // one long task that blocks the page. Later updates render at once.
   const firstRenderDone = useDeferredValue(source.data !== undefined);
+  const opening = source.isLoading || (source.data !== undefined && !firstRenderDone);
+  // The server may have drawn this step already (server/http/walk-first-paint.ts): it goes once this screen shows it.
+  useDismissWalkShell(!opening);
 
-  if (source.isLoading || (source.data && !firstRenderDone)) {
+  if (opening) {
     return (
       <Screen testID="walk-loading">
         <ActivityIndicator color={colors.accent} />
@@ -100,10 +105,7 @@ function WalkHeader({ walk }: { walk: WalkDetail }) {
     <View style={styles.header}>
       <Text style={styles.tree}>{walk.doc.title}</Text>
       {job ? (
-        <Text style={styles.job}>
-          RO {job.roNumber} · {job.customerName}
-          {job.make || job.model ? ` · ${[job.year, job.make, job.model].filter(Boolean).join(' ')}` : ''}
-        </Text>
+        <Text style={styles.job}>{walkJobLine(job)}</Text>
       ) : null}
     </View>
   );

@@ -1,7 +1,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import zlib from 'node:zlib';
-import express, { type Express } from 'express';
+import express, { type Express, type Request, type Response } from 'express';
 import { compressedAssets } from './compressed-assets';
 import { preferredEncoding } from './content-encoding';
 
@@ -26,7 +26,7 @@ export function isImmutableAsset(relativePath: string): boolean {
  * Hashed bundles and fonts are cached for a year; index.html is always revalidated.
  * The fallback never answers /api paths (those get JSON 404s).
  */
-export function mountStaticSite(app: Express, distDir: string) {
+export function mountStaticSite(app: Express, distDir: string, drawnAhead?: (req: Request, res: Response) => Promise<string>) {
   const indexFile = path.join(distDir, 'index.html');
   // Hashed bundles and fonts go out Brotli- or gzip-compressed; the rest (and old browsers) fall through.
   app.use(compressedAssets(distDir));
@@ -42,12 +42,15 @@ export function mountStaticSite(app: Express, distDir: string) {
   );
   app.get('/{*splat}', (req, res, next) => {
     if (req.path === '/api' || req.path.startsWith('/api/')) return next();
-    fs.readFile(indexFile, 'utf8', (err, html) => {
+    fs.readFile(indexFile, 'utf8', async (err, html) => {
       if (err) {
         res.status(503).type('text/plain').send('The web app has not been built yet. Run `npm start`, which builds it.');
         return;
       }
-      res.setHeader('Cache-Control', 'no-cache');
+      // A page drawn for this person (a walk's step) is theirs alone: never stored. Failing to draw it is no error.
+      const ahead = drawnAhead ? await drawnAhead(req, res).catch(() => '') : '';
+      if (ahead) html = html.replace('<div id="root">', `${ahead}<div id="root">`);
+      res.setHeader('Cache-Control', ahead ? 'private, no-store' : 'no-cache');
       res.setHeader('Vary', 'Accept-Encoding');
       res.type('html');
       // The page (about 7 KB with the shell's styles) is the first thing a phone waits for: compress it too.

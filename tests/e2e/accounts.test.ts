@@ -2,7 +2,7 @@ import crypto from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
 import { ROLES, type Role } from '@/shared/roles';
-import { NAV_ITEMS, navItemsFor } from '@/components/nav/nav-items';
+import { NAV_ITEMS, navItemsFor } from '@/shared/nav-items';
 import { DESKTOP, PHONE, launchBrowser, screenshot, watchConsole } from '../support/browser';
 import { startTestServer } from '../support/test-app';
 import { signInThroughScreen } from '../support/sign-in-page';
