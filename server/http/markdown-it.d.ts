@@ -5,6 +5,7 @@ declare module 'markdown-it' {
     tag: string;
     content: string;
     markup: string;
+    hidden: boolean;
     children: Token[] | null;
     attrGet(name: string): string | null;
   }

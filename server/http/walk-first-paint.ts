@@ -96,10 +96,13 @@ function markdownHtml(body: string): string {
   const lists: Array<{ ordered: boolean; n: number }> = [];
   for (const t of tokens) {
     switch (t.type) {
+      // A tight list's paragraphs are hidden: its items hold their text directly, as the renderer draws them.
       case 'paragraph_open':
-        out += '<div class="wf-md-p">';
+        if (!t.hidden) out += '<div class="wf-md-p">';
         break;
       case 'paragraph_close':
+        if (!t.hidden) out += '</div>';
+        break;
       case 'heading_close':
         out += '</div>';
         break;

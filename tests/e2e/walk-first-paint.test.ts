@@ -27,6 +27,7 @@ describe("a walk page drawn by the server before the app loads", () => {
   const app = servedAppInChromium();
   let shop: TestShop;
   let walkId: number;
+  let firstStepWalkId: number;
   let title: string;
 
   beforeAll(async () => {
@@ -40,9 +41,19 @@ describe("a walk page drawn by the server before the app loads", () => {
     title = walk.body.doc?.title ?? (await tech.get(`/api/walks/${walkId}`)).body.doc.title;
     // One answer in: the Back button shows, and the step has cautions and two paragraphs.
     await tech.post(`/api/walks/${walkId}/steps`).send({ stepId: crypto.randomUUID(), event: { type: 'reading', value: 18, unit: '%' } });
+    // At its first step: no Back button, and a paragraph then a numbered list.
+    firstStepWalkId = (await tech.post('/api/walks').send({ jobId: job.body.job.id, treeId: tree.id })).body.walk.id;
   });
 
-  // Each drawn part beside the real screen's element for it.
+  // Each drawn part beside the real screen's element for it: a step with two paragraphs, and the first step with a list.
+  const firstStepParts = (): Array<[shell: string, app: string]> => [
+    ['[data-part="progress"]', '[data-testid="walk-progress"]'],
+    ['[data-part="cautions"]', '[data-testid="step-cautions"]'],
+    ['[data-part="title"]', '[data-testid="step-title"]'],
+    ['.wf-md-text >> nth=0', '[data-testid="walk-screen"] >> text=/^Before clearing anything/'],
+    ['.wf-md-mark >> nth=2', '[data-testid="walk-screen"] >> text=/^3\\.$/'],
+    ['.wf-md-li .wf-md-text >> nth=2', '[data-testid="walk-screen"] >> text=/^Add short-term and long-term trim/'],
+  ];
   const parts = (): Array<[shell: string, app: string]> => [
     ['[data-part="header"]', '[data-testid="app-header"]'],
     ['[data-part="tree"]', `[data-testid="walk-screen"] >> text="${title}"`],
@@ -59,29 +70,34 @@ describe("a walk page drawn by the server before the app loads", () => {
     it(`draws the current step where the walk screen draws it, then gives way to it, at ${viewport.width}x${viewport.height}`, async () => {
       const context = await app.browser.newContext({ viewport });
       await signInContext(context, app.server.url, shop.people.tech.email);
-      const url = `${app.server.url}/walks/${walkId}`;
-
-      // Without the app's JavaScript: only what the server drew.
-      const bare = await context.newPage();
-      await bare.route('**/_expo/static/**', (route) => route.abort());
-      await bare.goto(url);
-      await bare.locator('#boot-shell-walk [data-part="title"]').waitFor();
-      await bare.evaluate(() => document.fonts.ready);
-      const drawn = await boxes(bare, parts().map(([s]) => `#boot-shell-walk ${s}`));
-      await screenshot(bare, `walk-first-paint-${name}`);
-      await bare.close();
-
-      // With it: the walk screen takes over in the same places, and the drawn page is gone.
-      const page = await context.newPage();
-      const errors = watchConsole(page);
-      await page.goto(url);
-      await page.getByTestId('step-title').waitFor({ timeout: 30_000 });
-      await page.locator('#boot-shell-walk').waitFor({ state: 'detached', timeout: 30_000 });
-      const real = await boxes(page, parts().map(([, a]) => a));
-      expect(real.map(({ part: _, ...b }) => b)).toEqual(drawn.map(({ part: _, ...b }) => b));
-      expect(errors).toEqual([]);
+      await compare(context, `${app.server.url}/walks/${walkId}`, parts(), `walk-first-paint-${name}`);
+      await compare(context, `${app.server.url}/walks/${firstStepWalkId}`, firstStepParts(), `walk-first-paint-list-${name}`);
       await context.close();
     });
+  }
+
+  /** The drawn page without the app's JavaScript, then the walk screen with it: the same places, and the drawing gone. */
+  async function compare(context: BrowserContext, url: string, pairs: Array<[string, string]>, shot: string) {
+    // Without the app's JavaScript: only what the server drew.
+    const bare = await context.newPage();
+    await bare.route('**/_expo/static/**', (route) => route.abort());
+    await bare.goto(url);
+    await bare.locator('#boot-shell-walk [data-part="title"]').waitFor();
+    await bare.evaluate(() => document.fonts.ready);
+    const drawn = await boxes(bare, pairs.map(([s]) => `#boot-shell-walk ${s}`));
+    await screenshot(bare, shot);
+    await bare.close();
+
+    // With it: the walk screen takes over in the same places, and the drawn page is gone.
+    const page = await context.newPage();
+    const errors = watchConsole(page);
+    await page.goto(url);
+    await page.getByTestId('step-title').waitFor({ timeout: 30_000 });
+    await page.locator('#boot-shell-walk').waitFor({ state: 'detached', timeout: 30_000 });
+    const real = await boxes(page, pairs.map(([, a]) => a));
+    expect(real.map(({ part: _, ...b }) => b)).toEqual(drawn.map(({ part: _, ...b }) => b));
+    expect(errors).toEqual([]);
+    await page.close();
   }
 
   it('is drawn only for a signed-in person who may read the open walk, and never stored', async () => {
