@@ -7,6 +7,13 @@ import type { WalkPosition } from './schemas/walks';
  * the two never say different things.
  */
 
+/** The caution panel's heading and closing line, around each hazard's words. */
+export const CAUTION_HEADING = '⚠ Caution: read before you start';
+export const CAUTION_DEFER = "Follow the vehicle maker's service information, local codes and licensed practice.";
+
+/** The button that takes back the latest answer. */
+export const BACK_LABEL = '‹ Back: undo last answer';
+
 /** How a step's kind reads above its title. */
 export const STEP_KIND_WORDS = { ask: 'Check', reading: 'Measure', action: 'Do', cause: 'Cause found', refer: 'Hand over' } as const;
 

@@ -1,6 +1,7 @@
 import { StyleSheet, Text, View } from 'react-native';
 import { HAZARD_LABELS, type Hazard } from '@/trees/tree-format';
 import { colors, fonts, radius, space, type } from '@/components/theme';
+import { CAUTION_DEFER, CAUTION_HEADING } from '@/shared/walk-words';
 
 /**
  * A step's safety cautions, shown before anything else on the step: a thick
@@ -10,14 +11,14 @@ export function CautionPanel({ cautions }: { cautions: ReadonlyArray<{ hazard: H
   if (!cautions.length) return null;
   return (
     <View style={styles.box} accessibilityRole="alert" testID="step-cautions">
-      <Text style={styles.head}>⚠ Caution: read before you start</Text>
+      <Text style={styles.head}>{CAUTION_HEADING}</Text>
       {cautions.map((c, i) => (
         <View key={i} style={styles.item}>
           <Text style={styles.hazard}>⚠ {HAZARD_LABELS[c.hazard]}</Text>
           <Text style={styles.text}>{c.text}</Text>
         </View>
       ))}
-      <Text style={styles.small}>Follow the vehicle maker's service information, local codes and licensed practice.</Text>
+      <Text style={styles.small}>{CAUTION_DEFER}</Text>
     </View>
   );
 }

@@ -4,7 +4,7 @@ import { router } from 'expo-router';
 import { availableAnswers } from '@/trees/engine';
 import type { WalkDetail } from '@/shared/schemas/walks';
 import { WALK_OUTCOME_LABELS } from '@/shared/schemas/walks';
-import { walkJobLine } from '@/shared/walk-words';
+import { BACK_LABEL, walkJobLine } from '@/shared/walk-words';
 import { Screen } from '@/components/screen';
 import { ThemedText } from '@/components/themed-text';
 import { Notice } from '@/components/notice';
@@ -61,7 +61,7 @@ export function WalkScreen({ source }: { source: WalkSource }) {
       {finished || w.position.stepsTaken === 0 ? null : (
         <View style={styles.row}>
           <Button
-            label="‹ Back: undo last answer"
+            label={BACK_LABEL}
             kind="secondary"
             disabled={sender.busy}
             onPress={() => void sender.undo()}

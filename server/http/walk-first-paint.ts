@@ -4,7 +4,8 @@ import type { WalkDetail } from '@/shared/schemas/walks';
 import { ROLE_LABELS } from '@/shared/roles';
 import { activeItem, navItemsFor } from '@/shared/nav-items';
 import { navIconShapes, type IconShape } from '@/shared/nav-icon-shapes';
-import { STEP_KIND_WORDS, walkJobLine, walkProgress } from '@/shared/walk-words';
+import { BACK_LABEL, CAUTION_DEFER, CAUTION_HEADING, STEP_KIND_WORDS, walkJobLine, walkProgress } from '@/shared/walk-words';
+import { colors } from '@/components/theme';
 import { HAZARD_LABELS } from '@/trees/tree-format';
 import { WALK_SHELL_STYLE } from './walk-first-paint-style';
 
@@ -31,14 +32,15 @@ export function walkFirstPaint(me: Me, w: WalkDetail): string {
     items
       .map((item) => {
         const active = item === current;
-        const colour = layout === 'rail' ? (active ? '#1E2A32' : '#F6F4EF') : active ? '#0A5E58' : '#4E5D68';
+        // As NavLink in components/nav/app-shell.tsx.
+        const colour = layout === 'rail' ? (active ? colors.ink : colors.paper) : active ? colors.accentDark : colors.inkMuted;
         return `<div class="wf-${layout}-item${active ? ' wf-active' : ''}">${icon(item.icon, colour)}<div class="wf-t wf-${layout}-label" style="color:${colour}">${esc(item.label)}</div></div>`;
       })
       .join('');
   const cautions = meta.cautions.length
-    ? `<div class="wf-caution" data-part="cautions"><div class="wf-t wf-caution-head">⚠ Caution: read before you start</div>${meta.cautions
+    ? `<div class="wf-caution" data-part="cautions"><div class="wf-t wf-caution-head">${esc(CAUTION_HEADING)}</div>${meta.cautions
         .map((c) => `<div class="wf-caution-item"><div class="wf-t wf-hazard">⚠ ${esc(HAZARD_LABELS[c.hazard])}</div><div class="wf-t wf-caution-text">${esc(c.text)}</div></div>`)
-        .join('')}<div class="wf-t wf-small">Follow the vehicle maker's service information, local codes and licensed practice.</div></div>`
+        .join('')}<div class="wf-t wf-small">${esc(CAUTION_DEFER)}</div></div>`
     : '';
   return `<style>${WALK_SHELL_STYLE}</style>
 <div id="boot-shell-walk" class="wf" inert>
@@ -49,7 +51,7 @@ export function walkFirstPaint(me: Me, w: WalkDetail): string {
 <div class="wf-scroll"><div class="wf-outer"><div class="wf-inner">
 <div class="wf-walk-header"><div class="wf-t wf-tree" data-part="tree">${esc(w.doc.title)}</div>${w.job ? `<div class="wf-t wf-job">${esc(walkJobLine(w.job))}</div>` : ''}</div>
 <div class="wf-progress" data-part="progress"><div class="wf-t wf-progress-text"><span class="wf-strong">${esc(progress.taken)}</span>${esc(` · ${progress.words}`)}</div><div class="wf-progress-bar"><div class="wf-progress-fill" style="width:${progress.percent}%"></div></div></div>
-${w.position.stepsTaken > 0 ? '<div class="wf-row"><div class="wf-button" data-part="back"><div class="wf-t wf-button-text">‹ Back: undo last answer</div></div></div>' : ''}
+${w.position.stepsTaken > 0 ? `<div class="wf-row"><div class="wf-button" data-part="back"><div class="wf-t wf-button-text">${esc(BACK_LABEL)}</div></div></div>` : ''}
 <div class="wf-step">${cautions}<div class="wf-card"><div class="wf-t wf-kind">${w.position.final ? '■' : '●'} ${esc(STEP_KIND_WORDS[meta.kind])} · step ${w.position.stepsTaken + 1}</div><div class="wf-t wf-title" data-part="title">${esc(meta.title)}</div>${markdownHtml(meta.body)}</div></div>
 </div></div></div>
 <div class="wf-bar">${navLink('bar')}</div>
