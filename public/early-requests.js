@@ -31,4 +31,31 @@
     requests[paths[i]] = pending;
   }
   window.__baywalkEarly = { startedAt: Date.now(), requests: requests };
+
+  // A page the server has drawn (a walk's step: server/http/static-site.ts)
+  // names the app's scripts instead of loading them: they are fetched once
+  // the drawing is on screen (its fonts in, one frame painted), so the
+  // drawing never waits behind them. Inserted in order, run in order.
+  var later = document.querySelectorAll('script[data-app-src]');
+  if (later.length) {
+    var loaded = false;
+    var load = function () {
+      if (loaded) return;
+      loaded = true;
+      for (var j = 0; j < later.length; j++) {
+        var script = document.createElement('script');
+        script.src = later[j].getAttribute('data-app-src');
+        script.async = false;
+        document.head.appendChild(script);
+      }
+    };
+    var fontsIn = document.fonts && document.fonts.ready ? document.fonts.ready : Promise.resolve();
+    fontsIn.then(function () {
+      requestAnimationFrame(function () {
+        setTimeout(load, 0);
+      });
+    });
+    // A tab opened in the background paints no frames: load the app anyway.
+    setTimeout(load, 3000);
+  }
 })();

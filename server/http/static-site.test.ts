@@ -7,7 +7,7 @@ import zlib from 'node:zlib';
 import express from 'express';
 import request from 'supertest';
 import { afterAll, describe, expect, it } from 'vitest';
-import { isImmutableAsset, mountStaticSite, pageHtml } from './static-site';
+import { isImmutableAsset, mountStaticSite, pageHtml, withDrawing } from './static-site';
 
 const HTML = '<!doctype html><body><div id="boot-shell" hidden><h1>Baywalk</h1></div><div id="root"></div></body>';
 
@@ -87,5 +87,26 @@ describe('static site', () => {
     } finally {
       fs.rmSync(empty, { recursive: true, force: true });
     }
+  });
+});
+
+describe('withDrawing', () => {
+  // The tags as `expo export` writes them (dist/index.html).
+  const page =
+    '<head><script src="/early-requests.js" defer></script><script src="/_expo/static/js/web/__expo-metro-runtime-abc.js" defer></script>' +
+    '<script src="/_expo/static/js/web/__common-def.js" defer></script><script src="/_expo/static/js/web/entry-123.js" defer></script></head>' +
+    '<body><div id="root"></div></body>';
+
+  it("puts the drawing before the app's root and leaves the app's bundles to public/early-requests.js, in order", () => {
+    const html = withDrawing(page, '<div id="drawn">step</div>');
+    expect(html).toContain('<div id="drawn">step</div><div id="root">');
+    expect([...html.matchAll(/data-app-src="([^"]+)"/g)].map((m) => m[1])).toEqual([
+      '/_expo/static/js/web/__expo-metro-runtime-abc.js',
+      '/_expo/static/js/web/__common-def.js',
+      '/_expo/static/js/web/entry-123.js',
+    ]);
+    expect(html).not.toMatch(/<script src="\/_expo/);
+    // The early reads still run as they did.
+    expect(html).toContain('<script src="/early-requests.js" defer></script>');
   });
 });

@@ -5,6 +5,18 @@ import express, { type Express, type Request, type Response } from 'express';
 import { compressedAssets } from './compressed-assets';
 import { preferredEncoding } from './content-encoding';
 
+/** The app's bundles as the exported page loads them. */
+const APP_SCRIPT = /<script src="(\/_expo\/static\/js\/web\/[^"]+\.js)" defer><\/script>/g;
+
+/**
+ * A page with a drawing from the server (`ahead`, before the app's root): the
+ * app's bundles are only named, and public/early-requests.js loads them once
+ * the drawing is on screen, so it never waits behind 390 KB of script.
+ */
+export function withDrawing(html: string, ahead: string): string {
+  return html.replace(APP_SCRIPT, '<script type="text/plain" data-app-src="$1"></script>').replace('<div id="root">', `${ahead}<div id="root">`);
+}
+
 /** Paths whose page shows the pre-rendered sign-in shell of public/index.html until the app mounts. */
 const SHELL_PATHS = new Set(['/sign-in', '/sign-in/']);
 const HIDDEN_SHELL = '<div id="boot-shell" hidden>';
@@ -49,7 +61,7 @@ export function mountStaticSite(app: Express, distDir: string, drawnAhead?: (req
       }
       // A page drawn for this person (a walk's step) is theirs alone: never stored. Failing to draw it is no error.
       const ahead = drawnAhead ? await drawnAhead(req, res).catch(() => '') : '';
-      if (ahead) html = html.replace('<div id="root">', `${ahead}<div id="root">`);
+      if (ahead) html = withDrawing(html, ahead);
       res.setHeader('Cache-Control', ahead ? 'private, no-store' : 'no-cache');
       res.setHeader('Vary', 'Accept-Encoding');
       res.type('html');
