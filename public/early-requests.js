@@ -32,8 +32,8 @@
   }
   window.__baywalkEarly = { startedAt: Date.now(), requests: requests };
 
-  // A page the server has drawn (a walk's step: server/http/static-site.ts)
-  // names the app's scripts instead of loading them: they are fetched once
+  // A page the server has drawn (the sign-in shell, a walk's step:
+  // server/http/static-site.ts) names the app's scripts instead of loading them: they are fetched once
   // the drawing is on screen (its fonts in, one frame painted), so the
   // drawing never waits behind them. Inserted in order, run in order.
   var later = document.querySelectorAll('script[data-app-src]');

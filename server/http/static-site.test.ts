@@ -110,3 +110,11 @@ describe('withDrawing', () => {
     expect(html).toContain('<script src="/early-requests.js" defer></script>');
   });
 });
+
+describe('pageHtml', () => {
+  it('on the sign-in page, un-hides the shell and leaves the bundles to public/early-requests.js; elsewhere, the page as built', () => {
+    const page = '<script src="/_expo/static/js/web/entry-1.js" defer></script><div id="boot-shell" hidden></div><div id="root"></div>';
+    expect(pageHtml(page, '/sign-in')).toBe('<script type="text/plain" data-app-src="/_expo/static/js/web/entry-1.js"></script><div id="boot-shell"></div><div id="root"></div>');
+    expect(pageHtml(page, '/jobs')).toBe(page);
+  });
+});

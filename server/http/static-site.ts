@@ -9,9 +9,10 @@ import { preferredEncoding } from './content-encoding';
 const APP_SCRIPT = /<script src="(\/_expo\/static\/js\/web\/[^"]+\.js)" defer><\/script>/g;
 
 /**
- * A page with a drawing from the server (`ahead`, before the app's root): the
- * app's bundles are only named, and public/early-requests.js loads them once
- * the drawing is on screen, so it never waits behind 390 KB of script.
+ * A page with a drawing (`ahead` goes before the app's root; the sign-in
+ * shell is in the page already): the app's bundles are only named, and
+ * public/early-requests.js loads them once the drawing is on screen, so it
+ * never waits behind 390 KB of script.
  */
 export function withDrawing(html: string, ahead: string): string {
   return html.replace(APP_SCRIPT, '<script type="text/plain" data-app-src="$1"></script>').replace('<div id="root">', `${ahead}<div id="root">`);
@@ -21,9 +22,13 @@ export function withDrawing(html: string, ahead: string): string {
 const SHELL_PATHS = new Set(['/sign-in', '/sign-in/']);
 const HIDDEN_SHELL = '<div id="boot-shell" hidden>';
 
-/** index.html as sent for a path: on the sign-in page the shell is un-hidden (the CSP forbids an inline script doing it). */
+/**
+ * index.html as sent for a path: on the sign-in page the shell is un-hidden
+ * (the CSP forbids an inline script doing it), and, as on every drawn page,
+ * the app loads once it is painted.
+ */
 export function pageHtml(html: string, pagePath: string): string {
-  return SHELL_PATHS.has(pagePath) ? html.replace(HIDDEN_SHELL, '<div id="boot-shell">') : html;
+  return SHELL_PATHS.has(pagePath) ? withDrawing(html.replace(HIDDEN_SHELL, '<div id="boot-shell">'), '') : html;
 }
 
 /** Whether a file of dist/ (path relative to it) has a name that never changes content: cached for a year. */
