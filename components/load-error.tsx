@@ -4,12 +4,22 @@ import { Button } from './button';
 import { Notice } from './notice';
 import { space } from './theme';
 
+interface Props {
+  title: string;
+  /** The failed read's error; none when nothing could be asked (then `missing` says why). */
+  error: Error | null | undefined;
+  missing?: string;
+  onRetry: () => unknown;
+  busy?: boolean;
+  testID?: string;
+}
+
 /** A screen's read that failed: what went wrong, and "Try again" only when that can help. */
-export function LoadError({ title, error, onRetry, busy, testID }: { title: string; error: Error | null | undefined; onRetry: () => unknown; busy?: boolean; testID?: string }) {
+export function LoadError({ title, error, missing = 'It could not be loaded.', onRetry, busy, testID }: Props) {
   return (
     <View style={styles.col} testID={testID}>
       <Notice tone="error" title={title}>
-        {error?.message ?? 'It could not be loaded.'}
+        {error?.message ?? missing}
       </Notice>
       {canRetry(error) ? <Button label="Try again" kind="secondary" onPress={() => void onRetry()} busy={busy} testID="load-retry" /> : null}
     </View>

@@ -29,7 +29,7 @@ export function TreePage({ id }: { id: number }) {
           <ThemedText muted>Loading the tree…</ThemedText>
         </View>
       ) : tree.isError || !tree.data ? (
-        <LoadError title="Could not open this tree" error={tree.error ?? new Error('That tree was not found.')} onRetry={tree.refetch} busy={tree.isFetching} testID="tree-error" />
+        <LoadError title="Could not open this tree" error={tree.error} missing="That tree was not found." onRetry={tree.refetch} busy={tree.isFetching} testID="tree-error" />
       ) : (
         <TreeBody detail={tree.data} />
       )}

@@ -45,7 +45,7 @@ export function WalkScreen({ source }: { source: WalkSource }) {
   if (!source.data) {
     return (
       <Screen testID="walk-error">
-        <LoadError title="Could not open the walk" error={source.error ?? new Error('That address names no walk.')} onRetry={source.refetch} />
+        <LoadError title="Could not open the walk" error={source.error} missing="That address names no walk." onRetry={source.refetch} />
       </Screen>
     );
   }

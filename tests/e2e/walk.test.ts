@@ -153,9 +153,10 @@ describe('a job and a walk in Chromium', () => {
     await signIn(page, shop.people.tech.email);
     await page.goto(app.server.url + '/walks/not-a-walk');
     await page.getByTestId('walk-error').getByText('That address names no walk.').waitFor({ timeout: 15_000 });
+    // Asking again would get the same answer: no "Try again" for an address that names no walk, or a walk that does not exist.
+    expect(await page.getByTestId('load-retry').count()).toBe(0);
     await page.goto(app.server.url + '/walks/999999999');
     await page.getByTestId('walk-error').getByText('That walk was not found.').waitFor({ timeout: 15_000 });
-    // Asking again would get the same answer: no "Try again" for a walk that does not exist.
     expect(await page.getByTestId('load-retry').count()).toBe(0);
     await page.close();
   });
