@@ -14,9 +14,6 @@ function remove(id: string) {
   if (Platform.OS === 'web' && typeof document !== 'undefined') document.getElementById(id)?.remove();
 }
 
-/** An address the server draws a walk's first paint for (the walk screen, not its report). */
-export const isWalkPath = (pathname: string) => /^\/walks\/\d+\/?$/.test(pathname);
-
 /**
  * Frames (sign-in, signed-in) remove the drawn pages once they have mounted;
  * `keepWalk` leaves the walk's for the walk screen below to replace.

@@ -2,7 +2,8 @@ import { useDeferredValue, type ReactNode } from 'react';
 import { ActivityIndicator, StyleSheet, View } from 'react-native';
 import { useSession } from '@/hooks/use-session';
 import { usePathname } from 'expo-router';
-import { isWalkPath, useDismissBootShell } from '@/components/boot-shell';
+import { useDismissBootShell } from '@/components/boot-shell';
+import { walkPageId } from '@/shared/walk-paths';
 import { Button } from '@/components/button';
 import { Notice } from '@/components/notice';
 import { colors, space } from '@/components/theme';
@@ -17,7 +18,7 @@ export function SignedInFrame({ children }: { children: ReactNode }) {
   const session = useSession();
   // A signed-in person who opened /sign-in: the gate moves them here. A walk's
   // first paint stays for the walk screen, unless the frame cannot show it.
-  useDismissBootShell(isWalkPath(usePathname()) && !session.isError);
+  useDismissBootShell(walkPageId(usePathname()) !== undefined && !session.isError);
   // The shell and the first screen are rendered as a deferred update once the
   // person is known, in slices rather than as one long task (see walk-screen.tsx).
   const shellReady = useDeferredValue(!!session.data);

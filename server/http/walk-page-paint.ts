@@ -1,11 +1,9 @@
 import type { Request, Response } from 'express';
 import { WORKSHOP, type Role } from '@/shared/roles';
+import { walkPageId } from '@/shared/walk-paths';
 import type { Services } from '../services';
 import type { SessionUser } from './access';
 import { walkFirstPaint } from './walk-first-paint';
-
-/** The one path drawn ahead: a walk's own page (not its report). */
-const WALK_PAGE = /^\/walks\/(\d{1,12})\/?$/;
 
 /**
  * What the page for a request carries drawn ahead (walk-first-paint.ts): a
@@ -15,12 +13,12 @@ const WALK_PAGE = /^\/walks\/(\d{1,12})\/?$/;
  */
 export function walkPagePaint(services: Services, withSession: (req: Request, res: Response) => Promise<void>) {
   return async (req: Request, res: Response): Promise<string> => {
-    const id = WALK_PAGE.exec(req.path)?.[1];
-    if (!id || !req.headers.cookie) return '';
+    const id = walkPageId(req.path);
+    if (id === undefined || !req.headers.cookie) return '';
     await withSession(req, res);
     const user = req.user as SessionUser | undefined;
     if (!user || !WORKSHOP.includes(user.role as Role)) return '';
-    const [me, walk] = await Promise.all([services.auth.me(user.id), services.walks.get(user.shopId, Number(id))]);
+    const [me, walk] = await Promise.all([services.auth.me(user.id), services.walks.get(user.shopId, id)]);
     return walk.walk.status === 'open' ? walkFirstPaint(me, walk) : '';
   };
 }

@@ -1,6 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { Page } from 'playwright-core';
-import { DESKTOP, PHONE, screenshot, servedAppInChromium, watchConsole } from '../support/browser';
+import { boxesOf, DESKTOP, PHONE, screenshot, servedAppInChromium, watchConsole } from '../support/browser';
 
 // What the pre-rendered sign-in page of public/index.html draws, and the
 // real screen's element for each (components/auth/auth-frame.tsx, sign-in-form.tsx).
@@ -16,16 +15,6 @@ const PARTS: Array<[shell: string, app: string]> = [
   ['.bs-links a:nth-child(2)', '[data-testid="link-sign-up"]'],
 ];
 
-async function boxes(page: Page, selectors: string[]) {
-  const out = [];
-  for (const s of selectors) {
-    const box = await page.locator(s).first().boundingBox();
-    expect(box, s).not.toBeNull();
-    out.push({ x: Math.round(box!.x), y: Math.round(box!.y), width: Math.round(box!.width), height: Math.round(box!.height) });
-  }
-  return out;
-}
-
 describe('sign-in page drawn before the app loads', () => {
   const app = servedAppInChromium();
 
@@ -37,7 +26,7 @@ describe('sign-in page drawn before the app loads', () => {
       await bare.goto(app.server.url + '/sign-in');
       await bare.locator('#boot-shell .bs-tagline').waitFor();
       await bare.evaluate(() => document.fonts.ready);
-      const shell = await boxes(bare, PARTS.map(([s]) => `#boot-shell ${s}`));
+      const shell = await boxesOf(bare, PARTS.map(([s]) => `#boot-shell ${s}`));
       await screenshot(bare, `sign-in-shell-${name}`);
       await bare.close();
 
@@ -47,7 +36,7 @@ describe('sign-in page drawn before the app loads', () => {
       await page.goto(app.server.url + '/sign-in');
       await page.getByTestId('sign-in-form').waitFor();
       await page.locator('#boot-shell').waitFor({ state: 'detached' });
-      const real = await boxes(page, PARTS.map(([, a]) => a));
+      const real = await boxesOf(page, PARTS.map(([, a]) => a));
       expect(real).toEqual(shell);
       expect(errors).toEqual([]);
       await page.close();

@@ -1,8 +1,8 @@
 import crypto from 'node:crypto';
 import { beforeAll, describe, expect, it } from 'vitest';
-import type { BrowserContext, Page } from 'playwright-core';
+import type { BrowserContext } from 'playwright-core';
 import { installStockTrees } from '@/server/services/tree-stock';
-import { DESKTOP, PHONE, screenshot, servedAppInChromium, watchConsole } from '../support/browser';
+import { boxesOf, DESKTOP, PHONE, screenshot, servedAppInChromium, watchConsole } from '../support/browser';
 import { createShopWithPeople, signedIn, TEST_PASSWORD, type TestShop } from '../support/people';
 
 const LEAN_TREE = 'lean-after-intake-manifold';
@@ -11,16 +11,6 @@ const LEAN_TREE = 'lean-after-intake-manifold';
 async function signInContext(context: BrowserContext, url: string, email: string) {
   const res = await context.request.post(`${url}/api/auth/sign-in`, { data: { email, password: TEST_PASSWORD }, headers: { 'X-Baywalk-Request': '1' } });
   expect(res.status()).toBe(200);
-}
-
-async function boxes(page: Page, selectors: string[]) {
-  const out = [];
-  for (const s of selectors) {
-    const box = await page.locator(s).first().boundingBox();
-    expect(box, s).not.toBeNull();
-    out.push({ part: s, x: Math.round(box!.x), y: Math.round(box!.y), width: Math.round(box!.width), height: Math.round(box!.height) });
-  }
-  return out;
 }
 
 describe("a walk page drawn by the server before the app loads", () => {
@@ -84,7 +74,7 @@ describe("a walk page drawn by the server before the app loads", () => {
     await bare.goto(url);
     await bare.locator('#boot-shell-walk [data-part="title"]').waitFor();
     await bare.evaluate(() => document.fonts.ready);
-    const drawn = await boxes(bare, pairs.map(([s]) => `#boot-shell-walk ${s}`));
+    const drawn = await boxesOf(bare, pairs.map(([s]) => `#boot-shell-walk ${s}`));
     await screenshot(bare, shot);
     await bare.close();
 
@@ -94,8 +84,8 @@ describe("a walk page drawn by the server before the app loads", () => {
     await page.goto(url);
     await page.getByTestId('step-title').waitFor({ timeout: 30_000 });
     await page.locator('#boot-shell-walk').waitFor({ state: 'detached', timeout: 30_000 });
-    const real = await boxes(page, pairs.map(([, a]) => a));
-    expect(real.map(({ part: _, ...b }) => b)).toEqual(drawn.map(({ part: _, ...b }) => b));
+    const real = await boxesOf(page, pairs.map(([, a]) => a));
+    expect(real).toEqual(drawn);
     expect(errors).toEqual([]);
     await page.close();
   }

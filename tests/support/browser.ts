@@ -1,7 +1,7 @@
 /// <reference types="node" />
 import fs from 'node:fs';
 import path from 'node:path';
-import { afterAll, beforeAll } from 'vitest';
+import { afterAll, beforeAll, expect } from 'vitest';
 import { chromium, type Browser, type Page } from 'playwright-core';
 import { startTestServer } from './test-app';
 
@@ -59,4 +59,15 @@ export function watchConsole(page: Page): string[] {
 export async function screenshot(page: Page, name: string) {
   fs.mkdirSync(SCREENSHOT_DIR, { recursive: true });
   await page.screenshot({ path: path.join(SCREENSHOT_DIR, `${name}.png`), fullPage: true });
+}
+
+/** The boxes of the first element of each selector, rounded to whole pixels: for comparing a drawn page with the real screen. */
+export async function boxesOf(page: Page, selectors: string[]) {
+  const out = [];
+  for (const s of selectors) {
+    const box = await page.locator(s).first().boundingBox();
+    expect(box, s).not.toBeNull();
+    out.push({ x: Math.round(box!.x), y: Math.round(box!.y), width: Math.round(box!.width), height: Math.round(box!.height) });
+  }
+  return out;
 }
